@@ -1,0 +1,71 @@
+// finestra-cli: batch access to the Finestra engine. Wiring only: parse the command line, call
+// the command, report errors on stderr with a non-zero exit code.
+#include <CLI/CLI.hpp>
+#include <iostream>
+#include <map>
+
+#include "app/cli/commands.h"
+#include "core/common/errors.h"
+
+using namespace finestra::cli;
+
+namespace {
+void addProjectOptions(CLI::App* cmd, CommonOptions& options) {
+  cmd->add_option("project", options.project, "project file (JSON)")->required();
+  cmd->add_option("--format", options.format, "output: table (default), json or csv")
+      ->transform(CLI::CheckedTransformer(
+          std::map<std::string, OutputFormat>{{"table", OutputFormat::Table}, {"json", OutputFormat::Json},
+                                              {"csv", OutputFormat::Csv}},
+          CLI::ignore_case));
+}
+}  // namespace
+
+int main(int argc, char** argv) {
+  CLI::App app{"finestra-cli: fine structure of group-IV vacancy centres in diamond"};
+  app.require_subcommand(1);
+  CommonOptions common;
+  OutputFormat presetFormat = OutputFormat::Table;
+  SpectrumOptions spectrum;
+  SweepOptions sweep;
+
+  auto* presets = app.add_subcommand("presets", "list the built-in centre presets with sources");
+  presets->add_option("--format", presetFormat, "output: table, json or csv")
+      ->transform(CLI::CheckedTransformer(
+          std::map<std::string, OutputFormat>{{"table", OutputFormat::Table}, {"json", OutputFormat::Json},
+                                              {"csv", OutputFormat::Csv}},
+          CLI::ignore_case));
+  auto* levels = app.add_subcommand("levels", "energy levels of both manifolds for every selected class");
+  addProjectOptions(levels, common);
+  auto* lines = app.add_subcommand("lines", "optical lines with labels, frequencies and intensities");
+  addProjectOptions(lines, common);
+  auto* spec = app.add_subcommand("spectrum", "simulated PL or PLE spectrum (CSV unless --format json)");
+  addProjectOptions(spec, common);
+  spec->add_option("--unit", spectrum.unit, "GHz_detuning, GHz, THz, nm_vac, nm_air, meV or cm-1");
+  spec->add_option("--kind", spectrum.kind, "PL (emission) or PLE (excitation)");
+  spec->add_option("--from", spectrum.from, "start of the range (unit of --unit)");
+  spec->add_option("--to", spectrum.to, "end of the range (unit of --unit)");
+  spec->add_option("--points", spectrum.points, "number of points")->check(CLI::Range(2, 10000000));
+  auto* sw = app.add_subcommand("sweep", "levels and lines along a sweep defined in the project");
+  addProjectOptions(sw, common);
+  sw->add_option("--name", sweep.name, "sweep name (default: the first)");
+
+  try {
+    app.parse(argc, argv);
+  } catch (const CLI::ParseError& e) {
+    return app.exit(e);
+  }
+  try {
+    if (*presets) return runPresets(presetFormat);
+    if (*levels) return runLevels(common);
+    if (*lines) return runLines(common);
+    if (*spec) return runSpectrum(common, spectrum);
+    if (*sw) return runSweep(common, sweep);
+  } catch (const finestra::InputError& e) {
+    std::cerr << "finestra-cli: error: " << e.what() << '\n';
+    return 2;
+  } catch (const std::exception& e) {
+    std::cerr << "finestra-cli: error: " << e.what() << '\n';
+    return 3;
+  }
+  return 1;
+}

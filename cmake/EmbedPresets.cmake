@@ -1,0 +1,11 @@
+# Writes a C++ source holding every preset JSON as a raw string (called at build time).
+string(REPLACE "|" ";" FILES "${FILES}")
+set(body "// Generated from resources/presets by cmake/EmbedPresets.cmake. Do not edit.\n#include \"core/centre/embedded_presets.h\"\nnamespace finestra {\nconst std::vector<EmbeddedPreset>& embeddedPresets() {\n  static const std::vector<EmbeddedPreset> presets{\n")
+list(SORT FILES)
+foreach(f IN LISTS FILES)
+  file(READ "${f}" content)
+  get_filename_component(name "${f}" NAME)
+  string(APPEND body "    {\"${name}\", R\"finestra_json(${content})finestra_json\"},\n")
+endforeach()
+string(APPEND body "  };\n  return presets;\n}\n}  // namespace finestra\n")
+file(WRITE "${OUT}" "${body}")

@@ -1,0 +1,86 @@
+#include "core/centre/parameters.h"
+
+#include <cmath>
+
+#include "core/common/errors.h"
+
+namespace finestra {
+
+const std::array<ParamInfo, kParamCount>& paramTable() {
+  static const std::array<ParamInfo, kParamCount> table{{
+      {Param::ZplTHz, "zpl_THz", "THz", "zero-phonon line: centroid of the four zero-field lines", false},
+      {Param::LambdaG, "lambda_g_GHz", "GHz", "effective spin-orbit splitting, ground manifold", false},
+      {Param::LambdaU, "lambda_u_GHz", "GHz", "effective spin-orbit splitting, excited manifold", false},
+      {Param::QG, "q_g", "", "orbital Zeeman reduction factor, ground", false},
+      {Param::QU, "q_u", "", "orbital Zeeman reduction factor, excited", false},
+      {Param::GSpin, "g_spin", "", "electron spin g-factor", false},
+      {Param::JtXG, "jt_x_g_GHz", "GHz", "static Jahn-Teller distortion, x part, ground", false},
+      {Param::JtYG, "jt_y_g_GHz", "GHz", "static Jahn-Teller distortion, y part, ground", false},
+      {Param::JtXU, "jt_x_u_GHz", "GHz", "static Jahn-Teller distortion, x part, excited", false},
+      {Param::JtYU, "jt_y_u_GHz", "GHz", "static Jahn-Teller distortion, y part, excited", false},
+      {Param::TperpG, "tperp_g_PHz", "PHz/strain", "A1g strain coupling to exx+eyy, ground", false},
+      {Param::TparG, "tpar_g_PHz", "PHz/strain", "A1g strain coupling to ezz, ground", false},
+      {Param::DG, "d_g_PHz", "PHz/strain", "Eg strain coupling d, ground", false},
+      {Param::FG, "f_g_PHz", "PHz/strain", "Eg strain coupling f, ground", false},
+      {Param::TperpU, "tperp_u_PHz", "PHz/strain", "A1g strain coupling to exx+eyy, excited", false},
+      {Param::TparU, "tpar_u_PHz", "PHz/strain", "A1g strain coupling to ezz, excited", false},
+      {Param::DU, "d_u_PHz", "PHz/strain", "Eg strain coupling d, excited", false},
+      {Param::FU, "f_u_PHz", "PHz/strain", "Eg strain coupling f, excited", false},
+      {Param::DipoleRatio, "dipole_ratio_perp_par", "", "transition dipole ratio d_perp/d_par", false},
+      {Param::LifetimeNs, "lifetime_ns", "ns", "excited-state lifetime", false},
+      {Param::AParG, "A_par_g_MHz", "MHz", "hyperfine A parallel, ground", true},
+      {Param::APerpG, "A_perp_g_MHz", "MHz", "hyperfine A perpendicular, ground", true},
+      {Param::AParU, "A_par_u_MHz", "MHz", "hyperfine A parallel, excited", true},
+      {Param::APerpU, "A_perp_u_MHz", "MHz", "hyperfine A perpendicular, excited", true},
+      {Param::NuclearSpin, "nuclear_spin", "", "nuclear spin I of the isotope (0 without)", true},
+      {Param::GammaN, "gamma_n_MHz_per_T", "MHz/T", "nuclear gyromagnetic ratio (signed)", true},
+  }};
+  return table;
+}
+
+const ParamInfo& paramInfo(Param p) { return paramTable()[static_cast<std::size_t>(p)]; }
+
+std::optional<Param> findParam(std::string_view key) {
+  for (const ParamInfo& info : paramTable())
+    if (info.key == key) return info.id;
+  return std::nullopt;
+}
+
+double CentreParameters::require(Param p) const {
+  const double v = get(p);
+  if (!std::isfinite(v))
+    throw MissingValueError(std::string(paramInfo(p).key),
+                            "value is unknown for this centre; set it under centre.parameters");
+  return v;
+}
+
+int CentreParameters::nuclearDimension() const {
+  if (!hasNuclearSpin()) return 1;
+  return static_cast<int>(std::lround(2.0 * get(Param::NuclearSpin))) + 1;
+}
+
+void CentreParameters::validateForComputation() const {
+  for (const ParamInfo& info : paramTable()) {
+    if (info.hyperfine && !hasNuclearSpin() && info.id != Param::NuclearSpin) continue;
+    if (info.id == Param::NuclearSpin && !known(info.id)) continue;  // no isotope
+    require(info.id);
+  }
+  auto positive = [&](Param p) {
+    if (get(p) <= 0) throw InputError(std::string(paramInfo(p).key), "must be positive");
+  };
+  auto nonNegative = [&](Param p) {
+    if (get(p) < 0) throw InputError(std::string(paramInfo(p).key), "must not be negative");
+  };
+  positive(Param::ZplTHz);
+  nonNegative(Param::LambdaG);
+  nonNegative(Param::LambdaU);
+  positive(Param::LifetimeNs);
+  nonNegative(Param::DipoleRatio);
+  if (known(Param::NuclearSpin)) {
+    const double twoI = 2.0 * get(Param::NuclearSpin);
+    if (twoI < 0 || std::abs(twoI - std::round(twoI)) > 1e-9 || twoI > 19)
+      throw InputError("nuclear_spin", "must be a multiple of 1/2 between 0 and 9/2");
+  }
+}
+
+}  // namespace finestra

@@ -1,0 +1,256 @@
+// Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
+// non-finite numbers are errors naming the key path.
+#include <cmath>
+#include <fstream>
+#include <sstream>
+
+#include "core/common/errors.h"
+#include "core/io/json_reader.h"
+#include "core/io/project.h"
+
+namespace finestra {
+namespace {
+using nlohmann::json;
+
+CentreChoice readCentre(const JsonObjectReader& r) {
+  r.allowOnly({"preset", "isotope", "parameters"});
+  CentreChoice c;
+  c.preset = r.string("preset");
+  c.isotope = r.optionalString("isotope");
+  if (r.has("parameters")) {
+    const JsonObjectReader params = r.object("parameters");
+    for (const auto& [key, value] : r.raw("parameters").items()) {
+      if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
+      c.overrides[key] = finiteNumber(value, params.keyPath(key));
+    }
+  }
+  return c;
+}
+
+SampleSetting readSample(const JsonObjectReader& r) {
+  r.allowOnly({"normal", "in_plane_x"});
+  return {r.vec3("normal"), r.vec3("in_plane_x")};
+}
+
+FieldSetting readField(const JsonObjectReader& r) {
+  r.allowOnly({"magnitude_T", "polar_deg", "azimuth_deg", "vector_lab_T", "vector_crystal_T"});
+  const int forms = int(r.has("magnitude_T")) + int(r.has("vector_lab_T")) + int(r.has("vector_crystal_T"));
+  if (forms != 1)
+    throw InputError(r.keyPath(""), "give exactly one of magnitude_T (with polar_deg, azimuth_deg), "
+                                    "vector_lab_T or vector_crystal_T");
+  FieldSetting f;
+  if (r.has("magnitude_T")) {
+    f.form = FieldSetting::Form::Angles;
+    f.magnitudeT = r.number("magnitude_T");
+    if (f.magnitudeT < 0) throw InputError(r.keyPath("magnitude_T"), "must not be negative");
+    f.polarDeg = r.number("polar_deg", 0.0);
+    f.azimuthDeg = r.number("azimuth_deg", 0.0);
+  } else if (r.has("vector_lab_T")) {
+    f.form = FieldSetting::Form::VectorLab;
+    f.vector = r.vec3("vector_lab_T");
+  } else {
+    f.form = FieldSetting::Form::VectorCrystal;
+    f.vector = r.vec3("vector_crystal_T");
+  }
+  return f;
+}
+
+Mat3 readTensor(const JsonObjectReader& r) {
+  r.allowOnly({"xx", "yy", "zz", "yz", "zx", "xy"});
+  return strainFromComponents(r.number("xx", 0), r.number("yy", 0), r.number("zz", 0), r.number("yz", 0),
+                              r.number("zx", 0), r.number("xy", 0));
+}
+
+EgStrain readEg(const JsonObjectReader& r) {
+  r.allowOnly({"magnitude_GHz", "angle_deg"});
+  EgStrain e{r.number("magnitude_GHz"), r.number("angle_deg", 0.0)};
+  if (e.magnitudeGHz < 0) throw InputError(r.keyPath("magnitude_GHz"), "must not be negative");
+  return e;
+}
+
+StrainSetting readStrain(const JsonObjectReader& r) {
+  r.allowOnly({"crystal", "eg_ground", "eg_excited"});
+  StrainSetting s;
+  if (r.has("crystal")) s.crystal = readTensor(r.object("crystal"));
+  if (r.has("eg_ground")) s.extraGround = readEg(r.object("eg_ground"));
+  if (r.has("eg_excited")) s.extraExcited = readEg(r.object("eg_excited"));
+  return s;
+}
+
+DetectionConditions readConditions(const JsonObjectReader& r) {
+  r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz"});
+  DetectionConditions c;
+  c.temperatureK = r.number("temperature_K", c.temperatureK);
+  if (c.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  const std::string pop = r.string("populations", "thermal");
+  if (pop == "thermal") c.populations = PopulationModel::Thermal;
+  else if (pop == "equal") c.populations = PopulationModel::Equal;
+  else throw InputError(r.keyPath("populations"), "expected \"thermal\" or \"equal\", found \"" + pop + "\"");
+  if (r.has("collection_lab")) c.collectionLab = r.vec3("collection_lab");
+  c.analyserLab = r.optionalVec3("analyser_lab");
+  c.extraBroadeningGHz = r.number("broadening_GHz", 0.0);
+  if (c.extraBroadeningGHz < 0) throw InputError(r.keyPath("broadening_GHz"), "must not be negative");
+  return c;
+}
+
+std::vector<int> readClasses(const json& v, const std::string& path) {
+  if (!v.is_array() || v.empty()) throw InputError(path, "expected a non-empty array of class numbers 0..3");
+  std::vector<int> out;
+  for (std::size_t i = 0; i < v.size(); ++i) {
+    const std::string p = path + "[" + std::to_string(i) + "]";
+    if (!v[i].is_number_integer()) throw InputError(p, "expected an integer 0..3");
+    const auto c = v[i].get<long long>();
+    if (c < 0 || c > 3) throw InputError(p, "orientation class must be 0..3");
+    for (int seen : out)
+      if (seen == c) throw InputError(p, "class listed twice");
+    out.push_back(static_cast<int>(c));
+  }
+  return out;
+}
+
+SweepSpec readSweep(const JsonObjectReader& r) {
+  r.allowOnly({"name", "kind", "from", "to", "points", "plane_normal_lab", "start_lab", "strain_to"});
+  SweepSpec s;
+  s.name = r.string("name", "");
+  const std::string kind = r.string("kind");
+  if (kind == "magnitude") s.kind = SweepKind::Magnitude;
+  else if (kind == "angle") s.kind = SweepKind::Angle;
+  else if (kind == "strain") s.kind = SweepKind::Strain;
+  else throw InputError(r.keyPath("kind"), "expected \"magnitude\", \"angle\" or \"strain\"");
+  s.from = r.number("from");
+  s.to = r.number("to");
+  s.points = r.integer("points", s.points);
+  if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
+  if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
+    throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
+  if (r.has("plane_normal_lab")) s.planeNormalLab = r.vec3("plane_normal_lab");
+  if (r.has("start_lab")) s.startLab = r.vec3("start_lab");
+  if (s.kind == SweepKind::Angle) {
+    if (s.planeNormalLab.norm() < 1e-12) throw InputError(r.keyPath("plane_normal_lab"), "vector is zero");
+    const Vec3 inPlane = s.startLab - s.startLab.dot(s.planeNormalLab.normalized()) * s.planeNormalLab.normalized();
+    if (inPlane.norm() < 1e-9) throw InputError(r.keyPath("start_lab"), "must not be parallel to plane_normal_lab");
+  }
+  if (r.has("strain_to")) s.strainTo = readTensor(r.object("strain_to"));
+  else if (s.kind == SweepKind::Strain) throw InputError(r.keyPath("strain_to"), "missing (needed by a strain sweep)");
+  return s;
+}
+
+MeasuredPeak readPeak(const JsonObjectReader& r) {
+  r.allowOnly({"position", "unit", "sigma", "analyser_lab", "assign"});
+  MeasuredPeak p;
+  p.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
+  p.position = r.number("position");
+  try {
+    (void)toAbsoluteGHz(p.position, p.unit, 1.0);
+  } catch (const InputError& e) {
+    throw InputError(r.keyPath("position"), e.what());
+  }
+  p.sigma = r.number("sigma");
+  if (p.sigma <= 0) throw InputError(r.keyPath("sigma"), "uncertainty must be positive");
+  p.analyserLab = r.optionalVec3("analyser_lab");
+  if (p.analyserLab && p.analyserLab->norm() < 1e-12) throw InputError(r.keyPath("analyser_lab"), "vector is zero");
+  if (!r.isNull("assign")) {
+    const JsonObjectReader a = r.object("assign");
+    a.allowOnly({"class", "upper", "lower"});
+    PinnedAssignment pin{a.integer("class"), a.integer("upper"), a.integer("lower")};
+    if (pin.cls < 0 || pin.cls > 3) throw InputError(a.keyPath("class"), "orientation class must be 0..3");
+    if (pin.upper < 0) throw InputError(a.keyPath("upper"), "level index must not be negative");
+    if (pin.lower < 0) throw InputError(a.keyPath("lower"), "level index must not be negative");
+    p.assign = pin;
+  }
+  return p;
+}
+
+MeasurementSet readMeasurement(const JsonObjectReader& r) {
+  r.allowOnly({"name", "temperature_K", "field", "peaks"});
+  MeasurementSet m;
+  m.name = r.string("name", "");
+  m.temperatureK = r.number("temperature_K", m.temperatureK);
+  if (m.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  m.field = readField(r.object("field"));
+  const json& peaks = r.raw("peaks");
+  if (!peaks.is_array()) throw InputError(r.keyPath("peaks"), "expected an array");
+  for (std::size_t i = 0; i < peaks.size(); ++i)
+    m.peaks.push_back(readPeak(JsonObjectReader(peaks[i], r.keyPath("peaks") + "[" + std::to_string(i) + "]")));
+  return m;
+}
+
+FitSettings readFit(const JsonObjectReader& r) {
+  r.allowOnly({"free", "starts"});
+  FitSettings f;
+  if (r.has("free")) {
+    const json& free = r.raw("free");
+    if (!free.is_array()) throw InputError(r.keyPath("free"), "expected an array of parameter names");
+    for (std::size_t i = 0; i < free.size(); ++i) {
+      if (!free[i].is_string()) throw InputError(r.keyPath("free") + "[" + std::to_string(i) + "]", "expected a string");
+      f.free.push_back(free[i].get<std::string>());
+    }
+  }
+  f.starts = r.integer("starts", f.starts);
+  if (f.starts < 1 || f.starts > 1000) throw InputError(r.keyPath("starts"), "must be between 1 and 1000");
+  return f;
+}
+
+template <typename Item, typename ReadOne>
+std::vector<Item> readArray(const JsonObjectReader& top, const char* key, ReadOne readOne) {
+  std::vector<Item> out;
+  if (top.isNull(key)) return out;
+  const json& arr = top.raw(key);
+  if (!arr.is_array()) throw InputError(top.keyPath(key), "expected an array");
+  for (std::size_t i = 0; i < arr.size(); ++i)
+    out.push_back(readOne(JsonObjectReader(arr[i], top.keyPath(key) + "[" + std::to_string(i) + "]")));
+  return out;
+}
+
+Project readDocument(const json& doc) {
+  const JsonObjectReader top(doc, "");
+  top.allowOnly({"format", "version", "description", "centre", "sample", "field", "strain", "conditions",
+                 "classes", "sweeps", "measurements", "fit"});
+  if (top.string("format") != "finestra-project")
+    throw InputError("format", "not a Finestra project (expected \"finestra-project\")");
+  const int version = top.integer("version");
+  if (version > kProjectVersion)
+    throw InputError("version", "file version " + std::to_string(version) +
+                                    " is newer than this Finestra reads (version " + std::to_string(kProjectVersion) +
+                                    "); open it with a newer Finestra");
+  if (version < 1) throw InputError("version", "must be 1");
+  Project p;
+  p.description = top.string("description", "");
+  p.centre = readCentre(top.object("centre"));
+  if (top.has("sample")) p.sample = readSample(top.object("sample"));
+  if (top.has("field")) p.field = readField(top.object("field"));
+  if (top.has("strain")) p.strain = readStrain(top.object("strain"));
+  if (top.has("conditions")) p.conditions = readConditions(top.object("conditions"));
+  if (top.has("classes")) p.classes = readClasses(top.raw("classes"), "classes");
+  p.sweeps = readArray<SweepSpec>(top, "sweeps", readSweep);
+  p.measurements = readArray<MeasurementSet>(top, "measurements", readMeasurement);
+  if (!top.isNull("fit")) p.fit = readFit(top.object("fit"));
+  (void)LabFrame(p.sample.normal, p.sample.inPlaneX, "sample");  // reject bad axes now
+  return p;
+}
+
+}  // namespace
+
+Project parseProject(const std::string& text, const std::string& origin) {
+  const json doc = parseJsonStrict(text, origin);
+  try {
+    return readDocument(doc);
+  } catch (const InputError& e) {
+    throw InputError(origin + ": " + e.where(), std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+  } catch (const json::exception& e) {
+    throw InputError(origin, e.what());
+  }
+}
+
+std::string readTextFile(const std::string& path) {
+  std::ifstream in(path, std::ios::binary);
+  if (!in) throw InputError(path, "cannot open file for reading");
+  std::ostringstream ss;
+  ss << in.rdbuf();
+  if (in.bad()) throw InputError(path, "read error");
+  return ss.str();
+}
+
+Project readProjectFile(const std::string& path) { return parseProject(readTextFile(path), path); }
+
+}  // namespace finestra

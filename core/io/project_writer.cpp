@@ -1,0 +1,122 @@
+// Writing the version-1 project file, atomically.
+#include <cstdio>
+#include <filesystem>
+#include <fstream>
+#include <nlohmann/json.hpp>
+#include <unistd.h>
+
+#include "core/common/errors.h"
+#include "core/io/project.h"
+
+namespace finestra {
+namespace {
+using nlohmann::json;
+using ordered = nlohmann::ordered_json;
+
+ordered vec(const Vec3& v) { return ordered::array({v.x(), v.y(), v.z()}); }
+
+ordered tensor(const Mat3& e) {
+  return ordered{{"xx", e(0, 0)}, {"yy", e(1, 1)}, {"zz", e(2, 2)}, {"yz", e(1, 2)}, {"zx", e(2, 0)}, {"xy", e(0, 1)}};
+}
+
+ordered field(const FieldSetting& f) {
+  switch (f.form) {
+    case FieldSetting::Form::Angles:
+      return ordered{{"magnitude_T", f.magnitudeT}, {"polar_deg", f.polarDeg}, {"azimuth_deg", f.azimuthDeg}};
+    case FieldSetting::Form::VectorLab: return ordered{{"vector_lab_T", vec(f.vector)}};
+    case FieldSetting::Form::VectorCrystal: return ordered{{"vector_crystal_T", vec(f.vector)}};
+  }
+  return {};
+}
+
+ordered sweep(const SweepSpec& s) {
+  static const char* kinds[] = {"magnitude", "angle", "strain"};
+  ordered o{{"name", s.name}, {"kind", kinds[static_cast<int>(s.kind)]}, {"from", s.from}, {"to", s.to},
+            {"points", s.points}};
+  if (s.kind == SweepKind::Angle) {
+    o["plane_normal_lab"] = vec(s.planeNormalLab);
+    o["start_lab"] = vec(s.startLab);
+  }
+  if (s.kind == SweepKind::Strain) o["strain_to"] = tensor(s.strainTo);
+  return o;
+}
+
+ordered peak(const MeasuredPeak& p) {
+  ordered o{{"position", p.position}, {"unit", std::string(spectralUnitKey(p.unit))}, {"sigma", p.sigma}};
+  o["analyser_lab"] = p.analyserLab ? vec(*p.analyserLab) : ordered(nullptr);
+  o["assign"] = p.assign ? ordered{{"class", p.assign->cls}, {"upper", p.assign->upper}, {"lower", p.assign->lower}}
+                         : ordered(nullptr);
+  return o;
+}
+
+}  // namespace
+
+std::string projectToJson(const Project& p) {
+  ordered doc{{"format", "finestra-project"}, {"version", kProjectVersion}};
+  if (!p.description.empty()) doc["description"] = p.description;
+  ordered params = ordered::object();
+  for (const auto& [k, v] : p.centre.overrides) params[k] = v;
+  doc["centre"] = ordered{{"preset", p.centre.preset},
+                          {"isotope", p.centre.isotope ? ordered(*p.centre.isotope) : ordered(nullptr)},
+                          {"parameters", params}};
+  doc["sample"] = ordered{{"normal", vec(p.sample.normal)}, {"in_plane_x", vec(p.sample.inPlaneX)}};
+  doc["field"] = field(p.field);
+  ordered strain{{"crystal", tensor(p.strain.crystal)}};
+  auto eg = [](const EgStrain& e) { return ordered{{"magnitude_GHz", e.magnitudeGHz}, {"angle_deg", e.angleDeg}}; };
+  if (p.strain.extraGround.magnitudeGHz != 0) strain["eg_ground"] = eg(p.strain.extraGround);
+  if (p.strain.extraExcited.magnitudeGHz != 0) strain["eg_excited"] = eg(p.strain.extraExcited);
+  doc["strain"] = strain;
+  const auto& c = p.conditions;
+  doc["conditions"] = ordered{{"temperature_K", c.temperatureK},
+                              {"populations", c.populations == PopulationModel::Thermal ? "thermal" : "equal"},
+                              {"collection_lab", vec(c.collectionLab)},
+                              {"analyser_lab", c.analyserLab ? vec(*c.analyserLab) : ordered(nullptr)},
+                              {"broadening_GHz", c.extraBroadeningGHz}};
+  doc["classes"] = p.classes;
+  ordered sweeps = ordered::array();
+  for (const auto& s : p.sweeps) sweeps.push_back(sweep(s));
+  doc["sweeps"] = sweeps;
+  ordered measurements = ordered::array();
+  for (const auto& m : p.measurements) {
+    ordered peaks = ordered::array();
+    for (const auto& pk : m.peaks) peaks.push_back(peak(pk));
+    measurements.push_back(
+        ordered{{"name", m.name}, {"temperature_K", m.temperatureK}, {"field", field(m.field)}, {"peaks", peaks}});
+  }
+  doc["measurements"] = measurements;
+  doc["fit"] = ordered{{"free", p.fit.free}, {"starts", p.fit.starts}};
+  return doc.dump(2) + "\n";
+}
+
+void writeFileAtomically(const std::string& path, const std::string& text) {
+  namespace fs = std::filesystem;
+  const fs::path target(path);
+  const fs::path temp = target.parent_path() / (".~" + target.filename().string() + ".tmp");
+  {
+    std::ofstream out(temp, std::ios::binary | std::ios::trunc);
+    if (!out) throw InputError(path, "cannot write here (folder missing or not writable)");
+    out << text;
+    out.flush();
+    if (!out) {
+      std::error_code ec;
+      fs::remove(temp, ec);
+      throw InputError(path, "write failed (disk full?); the previous file is unchanged");
+    }
+  }
+  if (FILE* f = std::fopen(temp.c_str(), "rb")) {  // flush to disk before the rename
+    ::fsync(::fileno(f));
+    std::fclose(f);
+  }
+  std::error_code ec;
+  fs::rename(temp, target, ec);
+  if (ec) {
+    fs::remove(temp, ec);
+    throw InputError(path, "cannot replace the file: " + ec.message() + "; the previous file is unchanged");
+  }
+}
+
+void writeProjectFile(const Project& project, const std::string& path) {
+  writeFileAtomically(path, projectToJson(project));
+}
+
+}  // namespace finestra
