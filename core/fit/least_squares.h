@@ -1,0 +1,53 @@
+#pragma once
+// Nonlinear least squares with Eigen's Levenberg–Marquardt (MINPACK lmder port, unsupported
+// module), and the uncertainty analysis of the solution: covariance from the Jacobian scaled by
+// the reduced χ², correlations, and the directions the data cannot determine.
+#include <string>
+#include <vector>
+
+#include "core/fit/fit_model.h"
+
+namespace finestra {
+
+enum class LeastSquaresStatus {
+  Converged,       ///< a tolerance on the step, the χ² reduction or the gradient was met
+  EvaluationLimit, ///< stopped after the allowed number of evaluations
+  TooFewData,      ///< fewer residuals than parameters
+  Failed,          ///< the solver rejected the problem
+};
+
+std::string leastSquaresStatusText(LeastSquaresStatus status);
+
+struct LeastSquaresOptions {
+  int maxEvaluations = 400;
+  double tolerance = 1e-10;  ///< relative tolerance on the step and on the χ² reduction
+};
+
+struct LeastSquaresResult {
+  Eigen::VectorXd x;
+  double chi2 = 0;  ///< Σ residual² at x
+  int iterations = 0;
+  LeastSquaresStatus status = LeastSquaresStatus::Failed;
+  std::string detail;  ///< the solver's own reason for stopping
+};
+
+LeastSquaresResult minimiseLeastSquares(const FitModel& model, const Eigen::VectorXd& start,
+                                        const LeastSquaresOptions& options = {});
+
+struct UncertaintyAnalysis {
+  int dof = 0;                    ///< residuals − parameters
+  double chi2PerDof = 0;          ///< NaN when dof ≤ 0
+  Eigen::VectorXd standardErrors; ///< NaN for parameters in an undetermined direction
+  Eigen::MatrixXd correlation;    ///< NaN rows/columns for those parameters
+  std::vector<int> undetermined;  ///< indices of parameters taking part in a null direction
+  std::vector<Eigen::VectorXd> nullDirections;  ///< unit vectors in parameter space (column-normalised)
+  double conditionNumber = 0;     ///< of the column-normalised Jacobian, identifiable part
+};
+
+/// `jacobian` of the residuals (in σ units) at the solution, `chi2` there. A direction counts as
+/// undetermined when its singular value of the column-normalised Jacobian falls below
+/// `relativeThreshold` · the largest one, or when a column is numerically zero. Standard errors
+/// are √(C_kk · χ²/dof) with C the pseudo-inverse of JᵀJ on the determined subspace.
+UncertaintyAnalysis analyseUncertainty(const Eigen::MatrixXd& jacobian, double chi2, double relativeThreshold = 1e-6);
+
+}  // namespace finestra

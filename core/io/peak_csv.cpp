@@ -1,0 +1,138 @@
+#include "core/io/peak_csv.h"
+
+#include <array>
+#include <cmath>
+#include <map>
+#include <numbers>
+#include <optional>
+#include <sstream>
+
+#include "core/common/errors.h"
+#include "core/io/csv_line.h"
+
+namespace finestra {
+namespace {
+
+enum Column { Name, Field, Polar, Azimuth, Position, Unit, Sigma, Analyser, Temperature, ColumnCount };
+
+const std::array<const char*, ColumnCount> kColumnKeys{"measurement", "field_T",  "polar_deg",
+                                                       "azimuth_deg", "position", "unit",
+                                                       "sigma",       "analyser_deg", "temperature_K"};
+constexpr int kRequiredColumns = Sigma + 1;
+
+using ColumnMap = std::array<std::optional<std::size_t>, ColumnCount>;
+
+ColumnMap readHeader(const std::vector<std::string>& cells, const std::string& where) {
+  ColumnMap map;
+  for (std::size_t i = 0; i < cells.size(); ++i) {
+    bool known = false;
+    for (int c = 0; c < ColumnCount; ++c) {
+      if (cells[i] != kColumnKeys[static_cast<std::size_t>(c)]) continue;
+      if (map[static_cast<std::size_t>(c)]) throw InputError(where, "column '" + cells[i] + "' appears twice");
+      map[static_cast<std::size_t>(c)] = i;
+      known = true;
+    }
+    if (!known)
+      throw InputError(where, "unknown column '" + cells[i] +
+                                  "' (expected measurement, field_T, polar_deg, azimuth_deg, position, unit, "
+                                  "sigma, and optionally analyser_deg, temperature_K)");
+  }
+  for (int c = 0; c < kRequiredColumns; ++c)
+    if (!map[static_cast<std::size_t>(c)])
+      throw InputError(where, std::string("missing column '") + kColumnKeys[static_cast<std::size_t>(c)] + "'");
+  return map;
+}
+
+struct RowReader {
+  const std::vector<std::string>& cells;
+  const ColumnMap& map;
+  const std::string& where;
+
+  std::string text(Column c) const {
+    const auto& index = map[static_cast<std::size_t>(c)];
+    if (!index || *index >= cells.size()) return {};
+    return cells[*index];
+  }
+  std::optional<double> optionalNumber(Column c) const {
+    const std::string cell = text(c);
+    if (cell.empty()) return std::nullopt;
+    const auto v = parseCsvNumber(cell);
+    if (!v) throw InputError(where, std::string(kColumnKeys[static_cast<std::size_t>(c)]) + ": '" + cell + "' is not a number");
+    return v;
+  }
+  double number(Column c) const {
+    const auto v = optionalNumber(c);
+    if (!v) throw InputError(where, std::string(kColumnKeys[static_cast<std::size_t>(c)]) + ": value missing");
+    return *v;
+  }
+};
+
+bool sameSetting(const MeasurementSet& a, const MeasurementSet& b) {
+  return a.field.magnitudeT == b.field.magnitudeT && a.field.polarDeg == b.field.polarDeg &&
+         a.field.azimuthDeg == b.field.azimuthDeg && a.temperatureK == b.temperatureK;
+}
+
+}  // namespace
+
+std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::string& origin) {
+  std::istringstream in(text);
+  std::string line;
+  int lineNumber = 0;
+  std::optional<ColumnMap> header;
+  std::vector<MeasurementSet> sets;
+  std::map<std::string, std::size_t> setIndex;
+  while (std::getline(in, line)) {
+    ++lineNumber;
+    const std::string where = origin + ":" + std::to_string(lineNumber);
+    if (isCsvCommentOrBlank(line)) continue;
+    const auto cells = splitCsvLine(line, where);
+    if (!header) {
+      header = readHeader(cells, where);
+      continue;
+    }
+    const RowReader row{cells, *header, where};
+    MeasurementSet setting;
+    setting.name = row.text(Name);
+    if (setting.name.empty()) throw InputError(where, "measurement: name missing");
+    const double field = row.number(Field);
+    if (field < 0) throw InputError(where, "field_T: must not be negative");
+    setting.field = FieldSetting::fromAngles(field, row.number(Polar), row.number(Azimuth));
+    setting.temperatureK = row.optionalNumber(Temperature).value_or(4.0);
+    if (setting.temperatureK < 0) throw InputError(where, "temperature_K: must not be negative");
+
+    MeasuredPeak peak;
+    peak.position = row.number(Position);
+    peak.unit = parseSpectralUnit(row.text(Unit), where + ": unit");
+    peak.sigma = row.number(Sigma);
+    if (!(peak.sigma > 0)) throw InputError(where, "sigma: must be positive");
+    try {
+      toAbsoluteGHz(peak.position, peak.unit, 0.0);
+    } catch (const InputError& e) {
+      throw InputError(where, std::string("position: ") + e.what());
+    }
+    if (const auto angle = row.optionalNumber(Analyser)) {
+      const double a = *angle * std::numbers::pi / 180.0;
+      peak.analyserLab = Vec3(std::cos(a), std::sin(a), 0.0);
+    }
+
+    const auto found = setIndex.find(setting.name);
+    if (found == setIndex.end()) {
+      setIndex.emplace(setting.name, sets.size());
+      setting.peaks.push_back(peak);
+      sets.push_back(std::move(setting));
+    } else {
+      MeasurementSet& existing = sets[found->second];
+      if (!sameSetting(existing, setting))
+        throw InputError(where, "measurement '" + setting.name +
+                                    "' was given with another field setting or temperature on an earlier line");
+      existing.peaks.push_back(peak);
+    }
+  }
+  if (!header) throw InputError(origin, "no header row (expected measurement,field_T,polar_deg,azimuth_deg,position,unit,sigma)");
+  if (sets.empty()) throw InputError(origin, "no peak rows after the header");
+  return sets;
+}
+
+std::vector<MeasurementSet> readPeakCsv(const std::string& path) { return parsePeakCsv(readTextFile(path), path); }
+
+}  // namespace finestra

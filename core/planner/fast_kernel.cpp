@@ -1,0 +1,260 @@
+#include "core/planner/fast_kernel.h"
+
+#include <Eigen/Eigenvalues>
+#include <algorithm>
+#include <cmath>
+#include <limits>
+#include <numbers>
+
+#include "core/common/errors.h"
+#include "core/units/linewidth.h"
+
+namespace finestra {
+namespace {
+
+using Mat2 = Eigen::Matrix<cplx, 2, 2>;
+
+Mat2 pauli(int k) {
+  Mat2 m = Mat2::Zero();
+  const cplx i{0.0, 1.0};
+  switch (k) {
+    case 0: m << 1, 0, 0, 1; break;
+    case 1: m << 0, 1, 1, 0; break;
+    case 2: m << 0, -i, i, 0; break;
+    default: m << 1, 0, 0, -1; break;
+  }
+  return m;
+}
+
+// σ_a ⊗ s_b with the basis index 2·orbital + spin (hamiltonian.h).
+Matrix4c pauliProduct(int orbital, int spin) {
+  const Mat2 a = pauli(orbital), b = pauli(spin);
+  Matrix4c out;
+  for (int r = 0; r < 2; ++r)
+    for (int c = 0; c < 2; ++c) out.block<2, 2>(2 * r, 2 * c) = a(r, c) * b;
+  return out;
+}
+
+// (orbital, spin) Pauli indices of the components kept in PauliForm4, in its order.
+constexpr std::array<std::array<int, 2>, 8> kKept{{{0, 0}, {1, 0}, {2, 0}, {3, 0}, {0, 1}, {0, 2}, {0, 3}, {2, 3}}};
+
+double component(const Matrix4c& h, const Matrix4c& p) { return (h * p).trace().real() / 4.0; }
+
+// Three real roots of y³ + a2 y² + a1 y + a0 (trigonometric form, roots known to be real).
+std::array<double, 3> realCubicRoots(double a2, double a1, double a0) {
+  const double shift = a2 / 3.0;
+  const double p = a1 - a2 * shift;
+  const double q = 2.0 * shift * shift * shift - shift * a1 + a0;
+  if (p >= 0.0) return {-shift, -shift, -shift};
+  const double m = 2.0 * std::sqrt(-p / 3.0);
+  const double arg = std::clamp(3.0 * q / (p * m), -1.0, 1.0);
+  const double theta = std::acos(arg) / 3.0;
+  constexpr double third = 2.0 * std::numbers::pi / 3.0;
+  return {m * std::cos(theta) - shift, m * std::cos(theta - third) - shift, m * std::cos(theta - 2.0 * third) - shift};
+}
+
+Vector4r sorted(Vector4r v) {
+  std::sort(v.data(), v.data() + 4);
+  return v;
+}
+
+}  // namespace
+
+LinearHamiltonian4 LinearHamiltonian4::sample(const ManifoldModel& m, const StrainTerms& s, const Mat3& frame) {
+  LinearHamiltonian4 h;
+  h.constant = electronicHamiltonian(m, s, Vec3::Zero());
+  for (int c = 0; c < 3; ++c) h.perTesla[static_cast<std::size_t>(c)] = electronicHamiltonian(m, s, frame.col(c)) - h.constant;
+  return h;
+}
+
+void LinearHamiltonian4::at(const Vec3& b, Matrix4c& out) const {
+  out.noalias() = constant + b.x() * perTesla[0] + b.y() * perTesla[1] + b.z() * perTesla[2];
+}
+
+PauliForm4 PauliForm4::fromLinear(const LinearHamiltonian4& h) {
+  PauliForm4 form;
+  double scale = 0, stray = 0;
+  for (int a = 0; a < 4; ++a)
+    for (int b = 0; b < 4; ++b) {
+      const Matrix4c p = pauliProduct(a, b);
+      const double c0 = component(h.constant, p);
+      const Vec3 grad(component(h.perTesla[0], p), component(h.perTesla[1], p), component(h.perTesla[2], p));
+      const auto kept = std::find(kKept.begin(), kKept.end(), std::array<int, 2>{a, b});
+      const double size = std::abs(c0) + grad.cwiseAbs().sum();
+      scale = std::max(scale, size);
+      if (kept == kKept.end()) {
+        stray = std::max(stray, size);
+        continue;
+      }
+      const auto k = static_cast<std::size_t>(kept - kKept.begin());
+      form.value[k] = c0;
+      form.gradient[k] = grad;
+    }
+  form.closedForm = stray <= 1e-12 * std::max(scale, 1.0);
+  return form;
+}
+
+// For K = o·σ + b·s + c σ_y s_z (σ and s commute, each squares to 1):
+//   K² = S + 2J,  J = (o·σ)(b·s) + c o_y s_z + c b_z σ_y,
+//   J² = |o|²|b|² + c²(o_y² + b_z²) + 2c o_y b_z K,
+// so (K² − S)² = 4P + 8 c o_y b_z K: the depressed quartic x⁴ + p x² + q x + r with p = −2S,
+// q = −8 c o_y b_z, r = S² − 4P. Its resolvent cubic y³ + 2p y² + (p² − 4r) y − q² has the roots
+// (x1+x2)², (x1+x3)², (x1+x4)², and x = (±√y1 ± √y2 ± √y3)/2 with √y1 √y2 √y3 = −q.
+Vector4r quarticLevels(const PauliForm4& f, const Vec3& b) {
+  std::array<double, 8> v;
+  for (std::size_t k = 0; k < 8; ++k) v[k] = f.value[k] + f.gradient[k].dot(b);
+  const double e0 = v[0], ox = v[1], oy = v[2], oz = v[3], bx = v[4], by = v[5], bz = v[6], c = v[7];
+  const double o2 = ox * ox + oy * oy + oz * oz, b2 = bx * bx + by * by + bz * bz;
+  const double S = o2 + b2 + c * c;
+  const double P = o2 * b2 + c * c * (oy * oy + bz * bz);
+  const double p = -2.0 * S, q = -8.0 * c * oy * bz, r = S * S - 4.0 * P;
+  const auto y = realCubicRoots(2.0 * p, p * p - 4.0 * r, -q * q);
+  const double s1 = std::sqrt(std::max(y[0], 0.0)), s2 = std::sqrt(std::max(y[1], 0.0));
+  const double s3 = std::copysign(std::sqrt(std::max(y[2], 0.0)), -q);
+  Vector4r x;
+  x << (s1 + s2 + s3) / 2, (s1 - s2 - s3) / 2, (-s1 + s2 - s3) / 2, (-s1 - s2 + s3) / 2;
+  return sorted(x.array() + e0);
+}
+
+PlannerKernel::PlannerKernel(const CentreModel& model, const PlannerSettings& settings) : settings_(settings) {
+  if (!(settings.magnitudeT >= 0) || !std::isfinite(settings.magnitudeT))
+    throw InputError("plan.magnitude_T", "must be a finite, non-negative number");
+  if (!settings.driveLab.allFinite() || settings.driveLab.norm() < 1e-12)
+    throw InputError("plan.drive_lab", "must be a non-zero finite vector");
+  if (settings.gapScanSamples < 2 || settings.gapRefineSteps < 0)
+    throw InputError("plan.gap_scan", "needs at least 2 samples and a non-negative number of refinement steps");
+  ManifoldModel ground = model.manifold(Manifold::Ground), excited = model.manifold(Manifold::Excited);
+  ground.nuclearDim = excited.nuclearDim = 1;  // the planner's figures are electronic
+  const Vec3 driveCrystal = model.setup().lab.toCrystal(settings.driveLab.normalized());
+  for (int cls : settings.classes) {
+    if (cls < 0 || cls >= kClassCount) throw InputError("classes", "orientation class must be 0..3");
+    ClassData& d = classes_[static_cast<std::size_t>(cls)];
+    d.selected = true;
+    const Mat3& frame = defectFrame(cls);
+    d.ground = LinearHamiltonian4::sample(ground, model.strainFor(Manifold::Ground, cls), frame);
+    d.excited = LinearHamiltonian4::sample(excited, model.strainFor(Manifold::Excited, cls), frame);
+    d.groundForm = PauliForm4::fromLinear(d.ground);
+    d.excitedForm = PauliForm4::fromLinear(d.excited);
+    // ∂H/∂B·b̂: the Hamiltonian is linear in B, so the magnetic moment operator along b̂ is exactly
+    // the field-proportional part evaluated at B = b̂ (γ_S S·b̂ + q γ_L L_z b̂_z).
+    d.driveOperator = driveCrystal.x() * d.ground.perTesla[0] + driveCrystal.y() * d.ground.perTesla[1] +
+                      driveCrystal.z() * d.ground.perTesla[2];
+    const auto axis = classAxisIndices(cls);
+    d.axisCrystal = Vec3(axis[0], axis[1], axis[2]).normalized();
+  }
+  dipoleRatio_ = model.setup().centre.parameters.get(Param::DipoleRatio);
+  linewidthGHz_ = model.linewidthGHz();
+  freeElectronDrive_ = 0.5 * ground.spinZeeman;
+}
+
+PlannerKernel::GapResult PlannerKernel::smallestMiddleGap(const LinearHamiltonian4& h, const PauliForm4& form,
+                                                          const Vec3& direction, double magnitudeT,
+                                                          double gapAtEnd) const {
+  auto gapAt = [&](double t) {
+    const Vec3 b = (t * magnitudeT) * direction;
+    if (form.closedForm) {
+      const Vector4r e = quarticLevels(form, b);
+      return e[2] - e[1];
+    }
+    Matrix4c m;
+    h.at(b, m);
+    Eigen::SelfAdjointEigenSolver<Matrix4c> solver(m, Eigen::EigenvaluesOnly);
+    return solver.eigenvalues()[2] - solver.eigenvalues()[1];
+  };
+  const int n = settings_.gapScanSamples;
+  GapResult best{gapAtEnd, magnitudeT};
+  int bestIndex = n;
+  for (int k = 0; k < n; ++k) {
+    const double t = static_cast<double>(k) / n;
+    const double g = gapAt(t);
+    if (g < best.gapGHz) best = {g, t * magnitudeT}, bestIndex = k;
+  }
+  // Golden-section search in the bracket around the coarse minimum.
+  double lo = std::max(bestIndex - 1, 0) / static_cast<double>(n);
+  double hi = std::min(bestIndex + 1, n) / static_cast<double>(n);
+  constexpr double golden = 0.6180339887498949;
+  double t1 = hi - golden * (hi - lo), t2 = lo + golden * (hi - lo);
+  double g1 = gapAt(t1), g2 = gapAt(t2);
+  for (int step = 0; step < settings_.gapRefineSteps; ++step) {
+    if (g1 < g2) {
+      hi = t2, t2 = t1, g2 = g1;
+      t1 = hi - golden * (hi - lo), g1 = gapAt(t1);
+    } else {
+      lo = t1, t1 = t2, g1 = g2;
+      t2 = lo + golden * (hi - lo), g2 = gapAt(t2);
+    }
+  }
+  if (g1 < best.gapGHz) best = {g1, t1 * magnitudeT};
+  if (g2 < best.gapGHz) best = {g2, t2 * magnitudeT};
+  return best;
+}
+
+void PlannerKernel::evaluate(const Vec3& direction, double magnitudeT, std::array<ClassFigures, kClassCount>& out) const {
+  struct Lines {
+    std::array<double, 2> chosen;
+    std::array<double, 16> all;
+  };
+  std::array<Lines, kClassCount> lines{};
+  const Vec3 field = magnitudeT * direction;
+  const int firstExcited = settings_.family == LineFamily::C ? 0 : 2;
+  Matrix4c h;
+  Eigen::SelfAdjointEigenSolver<Matrix4c> groundSolver, excitedSolver;
+  for (int cls = 0; cls < kClassCount; ++cls) {
+    const ClassData& d = classes_[static_cast<std::size_t>(cls)];
+    if (!d.selected) continue;
+    ClassFigures& f = out[static_cast<std::size_t>(cls)];
+    d.ground.at(field, h);
+    groundSolver.compute(h);
+    d.excited.at(field, h);
+    excitedSolver.compute(h);
+    const Vector4r& eg = groundSolver.eigenvalues();
+    const Vector4r& eu = excitedSolver.eigenvalues();
+    const Matrix4c& vg = groundSolver.eigenvectors();
+    const Matrix4c& vu = excitedSolver.eigenvectors();
+
+    f.qubitGHz = eg[1] - eg[0];
+    f.driveGHzPerT = std::abs(vg.col(0).dot(d.driveOperator * vg.col(1)));
+    f.driveFraction = f.driveGHzPerT / freeElectronDrive_;
+
+    // Decay strength |d|² summed over the three polarisations, d_x = rσ_z, d_y = −rσ_x, d_z = 1.
+    auto strength = [&](int upper, int lower) {
+      const auto u = vu.col(upper);
+      const auto g = vg.col(lower);
+      const cplx z = g.dot(u);
+      const cplx x = g.head<2>().dot(u.head<2>()) - g.tail<2>().dot(u.tail<2>());
+      const cplx y = g.head<2>().dot(u.tail<2>()) + g.tail<2>().dot(u.head<2>());
+      return std::norm(z) + dipoleRatio_ * dipoleRatio_ * (std::norm(x) + std::norm(y));
+    };
+    double worst = kCyclicityCap;
+    Lines& l = lines[static_cast<std::size_t>(cls)];
+    for (int k = 0; k < 2; ++k) {
+      const int upper = firstExcited + k;
+      const double w0 = strength(upper, 0), w1 = strength(upper, 1);
+      const double conserving = std::max(w0, w1), flipping = std::min(w0, w1);
+      const double ratio = flipping > conserving / kCyclicityCap ? conserving / flipping : kCyclicityCap;
+      worst = std::min(worst, ratio);
+      l.chosen[static_cast<std::size_t>(k)] = eu[upper] - eg[w0 >= w1 ? 0 : 1];
+    }
+    f.cyclicity = worst;
+    for (int i = 0; i < 4; ++i)
+      for (int j = 0; j < 4; ++j) l.all[static_cast<std::size_t>(4 * i + j)] = eu[i] - eg[j];
+
+    const GapResult gg = smallestMiddleGap(d.ground, d.groundForm, direction, magnitudeT, eg[2] - eg[1]);
+    const GapResult gu = smallestMiddleGap(d.excited, d.excitedForm, direction, magnitudeT, eu[2] - eu[1]);
+    f.groundGapGHz = gg.gapGHz, f.groundGapFieldT = gg.atT;
+    f.excitedGapGHz = gu.gapGHz, f.excitedGapFieldT = gu.atT;
+    f.axisAngleDeg = std::acos(std::clamp(direction.dot(d.axisCrystal), -1.0, 1.0)) * 180.0 / std::numbers::pi;
+  }
+  for (int cls = 0; cls < kClassCount; ++cls) {
+    if (!classes_[static_cast<std::size_t>(cls)].selected) continue;
+    double gap = std::numeric_limits<double>::infinity();
+    for (int other = 0; other < kClassCount; ++other) {
+      if (other == cls || !classes_[static_cast<std::size_t>(other)].selected) continue;
+      for (double chosen : lines[static_cast<std::size_t>(cls)].chosen)
+        for (double any : lines[static_cast<std::size_t>(other)].all) gap = std::min(gap, std::abs(chosen - any));
+    }
+    out[static_cast<std::size_t>(cls)].separationLinewidths = gap / linewidthGHz_;
+  }
+}
+
+}  // namespace finestra
