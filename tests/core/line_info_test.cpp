@@ -27,8 +27,12 @@ TEST(LineInfo, ZeroFieldPolarisationOfTheFourLines) {
     for (const auto& l : s.lines) {
       const double par = axisParallelFraction(l, s.cls);
       if (std::isnan(par)) continue;
-      if (l.parent == 'B' || l.parent == 'C') EXPECT_NEAR(par, 1.0, 1e-9) << l.label();
-      if (l.parent == 'A' || l.parent == 'D') EXPECT_NEAR(par, 0.0, 1e-9) << l.label();
+      if (l.parent == 'B' || l.parent == 'C') {
+        EXPECT_NEAR(par, 1.0, 1e-9) << l.label();
+      }
+      if (l.parent == 'A' || l.parent == 'D') {
+        EXPECT_NEAR(par, 0.0, 1e-9) << l.label();
+      }
       ++checked;
     }
   EXPECT_GT(checked, 0);
