@@ -1,0 +1,68 @@
+#pragma once
+// Fitting a project to its measurements: alternate assignment and least squares until the
+// assignment is stable, from several starts; report values, standard errors (scaled by the reduced
+// χ²), correlations, χ²/dof, the residual of every peak and the parameters the data leave
+// undetermined (physics.md §6: line positions fix E-strain only through its magnitude).
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "core/fit/least_squares.h"
+#include "core/fit/peak_assignment.h"
+
+namespace finestra {
+
+struct FitOptions {
+  std::optional<int> starts;  ///< default: project.fit.starts
+  std::optional<std::vector<std::string>> free;  ///< default: project.fit.free
+  unsigned seed = 1;          ///< random starts are reproducible for a given seed
+  int maxRounds = 40;         ///< assignment/fit alternations per start
+  int threads = 0;            ///< 0: all cores
+  AssignmentOptions assignment;
+  LeastSquaresOptions solver;
+};
+
+struct FittedParameter {
+  std::string name, unit;
+  double value = 0;
+  double standardError = 0;  ///< NaN when fixed or undetermined
+  double startValue = 0;
+  bool free = false;
+  bool determined = true;
+};
+
+struct FittedPeak {
+  int measurement = 0, peak = 0;
+  std::optional<LineRef> line;  ///< none: outlier (left unassigned)
+  bool pinned = false;
+  std::string label;            ///< e.g. "C2", "" when unassigned
+  double measuredGHz = 0, sigmaGHz = 0;
+  double predictedGHz = 0, residualGHz = 0;  ///< NaN when unassigned
+};
+
+struct FitResult {
+  bool converged = false;
+  std::string status;         ///< human-readable convergence status
+  double chi2 = 0;
+  int dof = 0;
+  double chi2PerDof = 0;      ///< NaN when dof ≤ 0
+  std::vector<FittedParameter> parameters;  ///< free ones first, then fixed fit-specific ones
+  Eigen::MatrixXd correlation;              ///< between the free parameters (NaN: undetermined)
+  std::vector<FittedPeak> peaks;
+  std::vector<std::string> undetermined;     ///< names of free parameters the data cannot fix
+  std::vector<std::string> undeterminedCombinations;  ///< e.g. "0.71 strain_xx - 0.71 strain_yy"
+  int startsRun = 0, bestStart = 0, rounds = 0;
+  int assignedCount = 0, outlierCount = 0;
+  double conditionNumber = 0;
+  FitState state;             ///< the fitted state
+};
+
+/// Throws InputError (naming the key) for bad input; never for a fit that fails to converge,
+/// which is reported in the result.
+FitResult fitProject(const Project& project, const FitOptions& options = {});
+
+/// Writes the fitted centre parameters, strain and E-strain into a copy of the project (ZPL offset
+/// folded into zpl_THz). The magnet calibration has no place in the project and is not written.
+Project applyFitToProject(const Project& project, const FitResult& result);
+
+}  // namespace finestra
