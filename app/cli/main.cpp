@@ -5,6 +5,7 @@
 #include <map>
 
 #include "app/cli/commands.h"
+#include "app/cli/commands_plan.h"
 #include "core/common/errors.h"
 
 using namespace finestra::cli;
@@ -48,6 +49,10 @@ int main(int argc, char** argv) {
   auto* sw = app.add_subcommand("sweep", "levels and lines along a sweep defined in the project");
   addProjectOptions(sw, common);
   sw->add_option("--name", sweep.name, "sweep name (default: the first)");
+  PlanOptions plan;
+  auto* planCmd = app.add_subcommand("plan", "magnet planner: figures of merit over field directions, feasible region, best settings");
+  addProjectOptions(planCmd, common);
+  addPlanOptions(planCmd, plan);
 
   try {
     app.parse(argc, argv);
@@ -60,6 +65,7 @@ int main(int argc, char** argv) {
     if (*lines) return runLines(common);
     if (*spec) return runSpectrum(common, spectrum);
     if (*sw) return runSweep(common, sweep);
+    if (*planCmd) return runPlan(common, plan);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;

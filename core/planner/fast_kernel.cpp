@@ -12,6 +12,8 @@
 namespace finestra {
 namespace {
 
+constexpr double kUndefined = std::numeric_limits<double>::quiet_NaN();
+
 using Mat2 = Eigen::Matrix<cplx, 2, 2>;
 
 Mat2 pauli(int k) {
@@ -40,17 +42,9 @@ constexpr std::array<std::array<int, 2>, 8> kKept{{{0, 0}, {1, 0}, {2, 0}, {3, 0
 
 double component(const Matrix4c& h, const Matrix4c& p) { return (h * p).trace().real() / 4.0; }
 
-// Three real roots of y³ + a2 y² + a1 y + a0 (trigonometric form, roots known to be real).
-std::array<double, 3> realCubicRoots(double a2, double a1, double a0) {
-  const double shift = a2 / 3.0;
-  const double p = a1 - a2 * shift;
-  const double q = 2.0 * shift * shift * shift - shift * a1 + a0;
-  if (p >= 0.0) return {-shift, -shift, -shift};
-  const double m = 2.0 * std::sqrt(-p / 3.0);
-  const double arg = std::clamp(3.0 * q / (p * m), -1.0, 1.0);
-  const double theta = std::acos(arg) / 3.0;
-  constexpr double third = 2.0 * std::numbers::pi / 3.0;
-  return {m * std::cos(theta) - shift, m * std::cos(theta - third) - shift, m * std::cos(theta - 2.0 * third) - shift};
+double middleGapOf(const Matrix4c& h) {
+  const Vector4r e = Eigen::SelfAdjointEigenSolver<Matrix4c>(h, Eigen::EigenvaluesOnly).eigenvalues();
+  return e[2] - e[1];
 }
 
 Vector4r sorted(Vector4r v) {
@@ -100,20 +94,57 @@ PauliForm4 PauliForm4::fromLinear(const LinearHamiltonian4& h) {
 // so (K² − S)² = 4P + 8 c o_y b_z K: the depressed quartic x⁴ + p x² + q x + r with p = −2S,
 // q = −8 c o_y b_z, r = S² − 4P. Its resolvent cubic y³ + 2p y² + (p² − 4r) y − q² has the roots
 // (x1+x2)², (x1+x3)², (x1+x4)², and x = (±√y1 ± √y2 ± √y3)/2 with √y1 √y2 √y3 = −q.
-Vector4r quarticLevels(const PauliForm4& f, const Vec3& b) {
+namespace {
+
+struct ResolventRoots {
+  double y1, y2, y3;  ///< descending, clamped at 0
+  double q;
+};
+
+ResolventRoots resolventRoots(const PauliForm4& f, const Vec3& b, double& e0) {
   std::array<double, 8> v;
   for (std::size_t k = 0; k < 8; ++k) v[k] = f.value[k] + f.gradient[k].dot(b);
-  const double e0 = v[0], ox = v[1], oy = v[2], oz = v[3], bx = v[4], by = v[5], bz = v[6], c = v[7];
+  e0 = v[0];
+  const double ox = v[1], oy = v[2], oz = v[3], bx = v[4], by = v[5], bz = v[6], c = v[7];
   const double o2 = ox * ox + oy * oy + oz * oz, b2 = bx * bx + by * by + bz * bz;
   const double S = o2 + b2 + c * c;
   const double P = o2 * b2 + c * c * (oy * oy + bz * bz);
   const double p = -2.0 * S, q = -8.0 * c * oy * bz, r = S * S - 4.0 * P;
-  const auto y = realCubicRoots(2.0 * p, p * p - 4.0 * r, -q * q);
-  const double s1 = std::sqrt(std::max(y[0], 0.0)), s2 = std::sqrt(std::max(y[1], 0.0));
-  const double s3 = std::copysign(std::sqrt(std::max(y[2], 0.0)), -q);
+  // Trigonometric form of y³ + a2 y² + a1 y + a0 (three real roots); cos(θ − 2π/3) and
+  // cos(θ + 2π/3) follow from cos θ and sin θ.
+  const double a2 = 2.0 * p, a1 = p * p - 4.0 * r, a0 = -q * q;
+  const double shift = a2 / 3.0;
+  const double pp = a1 - a2 * shift;
+  const double qq = 2.0 * shift * shift * shift - shift * a1 + a0;
+  if (pp >= 0.0) return {std::max(-shift, 0.0), std::max(-shift, 0.0), std::max(-shift, 0.0), q};
+  const double m = 2.0 * std::sqrt(-pp / 3.0);
+  const double theta = std::acos(std::clamp(3.0 * qq / (pp * m), -1.0, 1.0)) / 3.0;  // in [0, π/3]
+  const double cs = std::cos(theta), sn = std::sin(theta);
+  constexpr double half = 0.5, halfRoot3 = 0.8660254037844386;
+  // θ ∈ [0, π/3] orders the three cosines: cos θ ≥ cos(θ − 2π/3) ≥ cos(θ + 2π/3).
+  return {std::max(m * cs - shift, 0.0), std::max(m * (-half * cs + halfRoot3 * sn) - shift, 0.0),
+          std::max(m * (-half * cs - halfRoot3 * sn) - shift, 0.0), q};
+}
+
+}  // namespace
+
+Vector4r quarticLevels(const PauliForm4& f, const Vec3& b) {
+  double e0 = 0;
+  const ResolventRoots y = resolventRoots(f, b, e0);
+  const double s1 = std::sqrt(y.y1), s2 = std::sqrt(y.y2);
+  const double s3 = std::copysign(std::sqrt(y.y3), -y.q);
   Vector4r x;
   x << (s1 + s2 + s3) / 2, (s1 - s2 - s3) / 2, (-s1 + s2 - s3) / 2, (-s1 - s2 + s3) / 2;
   return sorted(x.array() + e0);
+}
+
+// With s1 = √y1 the largest, the roots are (s1 ± (s2+s3))/2 and (−s1 ± (s2−s3))/2, so the gap
+// between the upper and the lower pair is s1 − max(|s2|, |s3|) = √y1 − √y2.
+double quarticMiddleGap(const PauliForm4& f, const Vec3& b) {
+  double e0 = 0;
+  const ResolventRoots y = resolventRoots(f, b, e0);
+  const double s1 = std::sqrt(y.y1), s2 = std::sqrt(y.y2);
+  return s1 + s2 > 0 ? (y.y1 - y.y2) / (s1 + s2) : 0.0;
 }
 
 PlannerKernel::PlannerKernel(const CentreModel& model, const PlannerSettings& settings) : settings_(settings) {
@@ -135,6 +166,8 @@ PlannerKernel::PlannerKernel(const CentreModel& model, const PlannerSettings& se
     d.excited = LinearHamiltonian4::sample(excited, model.strainFor(Manifold::Excited, cls), frame);
     d.groundForm = PauliForm4::fromLinear(d.ground);
     d.excitedForm = PauliForm4::fromLinear(d.excited);
+    d.groundGapAtZero = middleGapOf(d.ground.constant);
+    d.excitedGapAtZero = middleGapOf(d.excited.constant);
     // ∂H/∂B·b̂: the Hamiltonian is linear in B, so the magnetic moment operator along b̂ is exactly
     // the field-proportional part evaluated at B = b̂ (γ_S S·b̂ + q γ_L L_z b̂_z).
     d.driveOperator = driveCrystal.x() * d.ground.perTesla[0] + driveCrystal.y() * d.ground.perTesla[1] +
@@ -149,13 +182,10 @@ PlannerKernel::PlannerKernel(const CentreModel& model, const PlannerSettings& se
 
 PlannerKernel::GapResult PlannerKernel::smallestMiddleGap(const LinearHamiltonian4& h, const PauliForm4& form,
                                                           const Vec3& direction, double magnitudeT,
-                                                          double gapAtEnd) const {
+                                                          double gapAtStart, double gapAtEnd) const {
   auto gapAt = [&](double t) {
     const Vec3 b = (t * magnitudeT) * direction;
-    if (form.closedForm) {
-      const Vector4r e = quarticLevels(form, b);
-      return e[2] - e[1];
-    }
+    if (form.closedForm) return quarticMiddleGap(form, b);
     Matrix4c m;
     h.at(b, m);
     Eigen::SelfAdjointEigenSolver<Matrix4c> solver(m, Eigen::EigenvaluesOnly);
@@ -166,7 +196,7 @@ PlannerKernel::GapResult PlannerKernel::smallestMiddleGap(const LinearHamiltonia
   int bestIndex = n;
   for (int k = 0; k < n; ++k) {
     const double t = static_cast<double>(k) / n;
-    const double g = gapAt(t);
+    const double g = k == 0 ? gapAtStart : gapAt(t);
     if (g < best.gapGHz) best = {g, t * magnitudeT}, bestIndex = k;
   }
   // Golden-section search in the bracket around the coarse minimum.
@@ -236,11 +266,16 @@ void PlannerKernel::evaluate(const Vec3& direction, double magnitudeT, std::arra
       l.chosen[static_cast<std::size_t>(k)] = eu[upper] - eg[w0 >= w1 ? 0 : 1];
     }
     f.cyclicity = worst;
+    // A degenerate pair has no defined eigenvectors (e.g. B ⟂ axis without strain, where the two
+    // L_z sectors are degenerate): the drive and the branching between them are then undefined.
+    if (!(f.qubitGHz > kDegenerateGHz)) f.driveGHzPerT = f.driveFraction = f.cyclicity = kUndefined;
+    if (!(eu[firstExcited + 1] - eu[firstExcited] > kDegenerateGHz)) f.cyclicity = kUndefined;
     for (int i = 0; i < 4; ++i)
       for (int j = 0; j < 4; ++j) l.all[static_cast<std::size_t>(4 * i + j)] = eu[i] - eg[j];
 
-    const GapResult gg = smallestMiddleGap(d.ground, d.groundForm, direction, magnitudeT, eg[2] - eg[1]);
-    const GapResult gu = smallestMiddleGap(d.excited, d.excitedForm, direction, magnitudeT, eu[2] - eu[1]);
+    const GapResult gg = smallestMiddleGap(d.ground, d.groundForm, direction, magnitudeT, d.groundGapAtZero, eg[2] - eg[1]);
+    const GapResult gu =
+        smallestMiddleGap(d.excited, d.excitedForm, direction, magnitudeT, d.excitedGapAtZero, eu[2] - eu[1]);
     f.groundGapGHz = gg.gapGHz, f.groundGapFieldT = gg.atT;
     f.excitedGapGHz = gu.gapGHz, f.excitedGapFieldT = gu.atT;
     f.axisAngleDeg = std::acos(std::clamp(direction.dot(d.axisCrystal), -1.0, 1.0)) * 180.0 / std::numbers::pi;

@@ -39,6 +39,8 @@ struct PauliForm4 {
 /// Ascending eigenvalues from the closed-form quartic. Accurate to ~1e-8 of the manifold's energy
 /// scale: good for gaps between branches, not for the small qubit splitting.
 Vector4r quarticLevels(const PauliForm4& form, const Vec3& fieldCrystal);
+/// E2 − E1 (the gap between the lower and the upper pair of levels) from the same quartic.
+double quarticMiddleGap(const PauliForm4& form, const Vec3& fieldCrystal);
 
 class PlannerKernel {
 public:
@@ -59,12 +61,13 @@ private:
     PauliForm4 groundForm, excitedForm;
     Matrix4c driveOperator = Matrix4c::Zero();  ///< (γ_S S + q γ_L L_z ẑ)·b̂ in the manifold basis
     Vec3 axisCrystal = Vec3::UnitZ();
+    double groundGapAtZero = 0, excitedGapAtZero = 0;  ///< E2 − E1 at B = 0
   };
   struct GapResult {
     double gapGHz, atT;
   };
   GapResult smallestMiddleGap(const LinearHamiltonian4& h, const PauliForm4& form, const Vec3& direction,
-                              double magnitudeT, double gapAtEnd) const;
+                              double magnitudeT, double gapAtStart, double gapAtEnd) const;
 
   PlannerSettings settings_;
   std::array<ClassData, kClassCount> classes_;

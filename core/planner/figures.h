@@ -23,11 +23,12 @@ struct PlannerSettings {
   Vec3 driveLab = Vec3(1, 0, 0);       ///< microwave field direction b̂ in the lab frame
   LineFamily family = LineFamily::C;
   std::vector<int> classes{0, 1, 2, 3};///< selected classes (others are ignored everywhere)
-  int gapScanSamples = 16;             ///< coarse samples of 0..|B| for the smallest level gap
-  int gapRefineSteps = 14;             ///< golden-section steps around the coarse minimum
+  int gapScanSamples = 10;             ///< coarse samples of 0..|B| for the smallest level gap
+  int gapRefineSteps = 10;             ///< golden-section steps around the coarse minimum
 };
 
 /// Figures of one class. Cyclicity is capped at kCyclicityCap (an exactly forbidden spin flip).
+/// Drive and cyclicity are NaN where the pair of levels they refer to is degenerate.
 struct ClassFigures {
   double qubitGHz = 0;          ///< E_g1 − E_g0
   double driveGHzPerT = 0;      ///< |⟨g0|(γ_S S + q γ_L L_z ẑ)·b̂|g1⟩| per tesla of microwave field
@@ -42,6 +43,8 @@ struct ClassFigures {
 };
 
 inline constexpr double kCyclicityCap = 1e15;
+/// Splittings below this (GHz) count as degenerate: drive and cyclicity are then NaN (undefined).
+inline constexpr double kDegenerateGHz = 1e-9;
 
 /// The figures a constraint, an objective or a map can name. Keys are file/CLI names.
 enum class FigureId {

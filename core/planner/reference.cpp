@@ -70,6 +70,8 @@ std::array<ClassFigures, kClassCount> referenceFigures(const CentreModel& model,
       f.cyclicity = std::min(f.cyclicity, flip > keep / kCyclicityCap ? keep / flip : kCyclicityCap);
       chosen[static_cast<std::size_t>(cls)].push_back(u.energies[upper] - g.energies[w0 >= w1 ? 0 : 1]);
     }
+    if (!(f.qubitGHz > kDegenerateGHz)) f.driveGHzPerT = f.driveFraction = f.cyclicity = std::nan("");
+    if (!(u.energies[firstExcited + 1] - u.energies[firstExcited] > kDegenerateGHz)) f.cyclicity = std::nan("");
     for (Eigen::Index i = 0; i < 4; ++i)
       for (Eigen::Index j = 0; j < 4; ++j) all[static_cast<std::size_t>(cls)].push_back(u.energies[i] - g.energies[j]);
     std::tie(f.groundGapGHz, f.groundGapFieldT) = scanMiddleGap(model, Manifold::Ground, cls, direction, magnitudeT, gapSteps);

@@ -1,0 +1,222 @@
+#include "core/planner/plan_report.h"
+
+#include <cmath>
+
+namespace finestra {
+namespace {
+
+using json = nlohmann::ordered_json;
+
+// JSON has no infinity: an open bound or a missing neighbour class is written as null.
+json number(double v) { return std::isfinite(v) ? json(v) : json(nullptr); }
+json vec(const Vec3& v) { return json::array({v.x(), v.y(), v.z()}); }
+
+std::string cell(double v, int decimals) {
+  if (std::isnan(v)) return "-";
+  if (std::isinf(v)) return v > 0 ? "inf" : "-inf";
+  return fixed(v, decimals);
+}
+
+std::string cyclicityCell(double v) { return v >= kCyclicityCap ? "forbidden flip" : cell(v, 1); }
+// Undefined (degenerate) figures: "-" in tables, null in JSON.
+
+std::vector<std::string> figureCells(const ClassFigures& f) {
+  return {cell(f.qubitGHz, 4), cell(f.driveFraction, 4), cyclicityCell(f.cyclicity),
+          cell(f.separationLinewidths, 1), cell(f.groundGapGHz, 3), cell(f.excitedGapGHz, 3),
+          cell(f.axisAngleDeg, 2)};
+}
+const std::vector<std::string> kFigureHeaders{"qubit GHz", "drive/free e-", "cyclicity", "separation FWHM",
+                                              "ground gap GHz", "excited gap GHz", "axis angle deg"};
+
+std::vector<std::string> joined(std::vector<std::string> a, const std::vector<std::string>& b) {
+  a.insert(a.end(), b.begin(), b.end());
+  return a;
+}
+
+std::string vecCell(const Vec3& v, int decimals) {
+  return "[" + fixed(v.x(), decimals) + " " + fixed(v.y(), decimals) + " " + fixed(v.z(), decimals) + "]";
+}
+
+}  // namespace
+
+json figuresJson(const ClassFigures& f) {
+  return {{"qubit_GHz", f.qubitGHz},
+          {"drive_GHz_per_T", number(f.driveGHzPerT)},
+          {"drive_fraction", number(f.driveFraction)},
+          {"cyclicity", number(f.cyclicity)},
+          {"cyclicity_capped", f.cyclicity >= kCyclicityCap},
+          {"separation_linewidths", number(f.separationLinewidths)},
+          {"ground_gap_GHz", f.groundGapGHz},
+          {"ground_gap_at_T", f.groundGapFieldT},
+          {"excited_gap_GHz", f.excitedGapGHz},
+          {"excited_gap_at_T", f.excitedGapFieldT},
+          {"axis_angle_deg", f.axisAngleDeg}};
+}
+
+json spinTransitionsJson(const std::vector<SpinTransition>& transitions) {
+  json out = json::array();
+  for (const auto& t : transitions)
+    out.push_back({{"lower", t.lower}, {"upper", t.upper}, {"frequency_GHz", t.frequencyGHz},
+                   {"drive_GHz_per_T", t.driveGHzPerT}});
+  return out;
+}
+
+json planJson(const CentreModel& model, const PlanRequest& request, const PlanResult& result) {
+  json constraints = json::array();
+  for (const auto& c : request.constraints)
+    constraints.push_back({{"figure", std::string(figureInfo(c.figure).key)}, {"min", number(c.min)}, {"max", number(c.max)}});
+  const MagnetReach& reach = request.reach;
+  json reachJson = {{"kind", reachKindText(reach.kind)}, {"step_deg", reach.stepDeg}};
+  if (reach.kind == ReachKind::Plane) reachJson["normal_lab"] = vec(reach.planeNormalLab), reachJson["start_lab"] = vec(reach.planeStartLab);
+  if (reach.kind == ReachKind::SampleRotation)
+    reachJson["magnet_axis_lab"] = vec(reach.magnetAxisLab), reachJson["rotation_axis_lab"] = vec(reach.rotationAxisLab);
+
+  json regions = json::array();
+  for (const auto& r : result.regions) {
+    json intervals = json::array();
+    for (const auto& i : r.intervals) {
+      if (std::isnan(i.polarDeg)) intervals.push_back({{"angle_from_deg", i.fromDeg}, {"angle_to_deg", i.toDeg}});
+      else intervals.push_back({{"polar_deg", i.polarDeg}, {"azimuth_from_deg", i.fromDeg}, {"azimuth_to_deg", i.toDeg}});
+    }
+    regions.push_back({{"magnitude_T", r.magnitudeT}, {"reachable", result.directions.size()},
+                       {"feasible", r.feasibleCount}, {"fraction", r.fraction}, {"intervals", intervals}});
+  }
+  json best = json::array();
+  for (std::size_t k = 0; k < result.best.size(); ++k) {
+    const RankedSetting& s = result.best[k];
+    json classes = json::array();
+    for (int cls : request.settings.classes) {
+      const auto axis = classAxisIndices(cls);
+      json c = {{"class", cls}, {"axis_crystal", {axis[0], axis[1], axis[2]}}};
+      c.update(figuresJson(s.figures[static_cast<std::size_t>(cls)]));
+      classes.push_back(c);
+    }
+    best.push_back({{"rank", k + 1},
+                    {"magnitude_T", s.magnitudeT},
+                    {"polar_deg", s.direction.polarDeg},
+                    {"azimuth_deg", s.direction.azimuthDeg},
+                    {"magnet_angle_deg", number(s.direction.magnetAngleDeg)},
+                    {"field_lab_T", vec(s.fieldLabT)},
+                    {"field_crystal_T", vec(s.fieldCrystalT)},
+                    {"objective", figureValue(s.figures[static_cast<std::size_t>(request.targetClass)], request.objective.figure)},
+                    {"classes", classes},
+                    {"spin_transitions", spinTransitionsJson(s.spinTransitions)}});
+  }
+  return {{"target_class", request.targetClass},
+          {"lines", lineFamilyText(request.settings.family)},
+          {"drive_lab", vec(request.settings.driveLab.normalized())},
+          {"linewidth_GHz", model.linewidthGHz()},
+          {"reach", reachJson},
+          {"constraints", constraints},
+          {"objective", {{"figure", std::string(figureInfo(request.objective.figure).key)},
+                         {"goal", request.objective.maximise ? "max" : "min"}}},
+          {"regions", regions},
+          {"best", best}};
+}
+
+Table planRegionTable(const PlanRequest& request, const PlanResult& result) {
+  Table t;
+  const bool sphere = request.reach.kind == ReachKind::Sphere;
+  t.headers = {"|B| T", "feasible", "of", "share %", sphere ? "polar deg" : "", sphere ? "azimuth from" : "angle from",
+               sphere ? "azimuth to" : "angle to"};
+  if (!sphere) t.headers.erase(t.headers.begin() + 4);
+  for (const auto& r : result.regions) {
+    const std::vector<std::string> head{fixed(r.magnitudeT, 3), std::to_string(r.feasibleCount),
+                                        std::to_string(result.directions.size()), fixed(100 * r.fraction, 2)};
+    if (r.intervals.empty()) t.rows.push_back(joined(head, sphere ? std::vector<std::string>{"-", "-", "-"}
+                                                                  : std::vector<std::string>{"-", "-"}));
+    for (const auto& i : r.intervals) {
+      std::vector<std::string> tail{fixed(i.fromDeg, 2), fixed(i.toDeg, 2)};
+      if (sphere) tail.insert(tail.begin(), fixed(i.polarDeg, 2));
+      t.rows.push_back(joined(head, tail));
+    }
+  }
+  return t;
+}
+
+Table planBestTable(const PlanRequest& request, const PlanResult& result) {
+  Table t;
+  t.headers = joined({"rank", "|B| T", "polar deg", "azimuth deg", "magnet angle deg", "B crystal T"}, kFigureHeaders);
+  for (std::size_t k = 0; k < result.best.size(); ++k) {
+    const RankedSetting& s = result.best[k];
+    t.rows.push_back(joined({std::to_string(k + 1), fixed(s.magnitudeT, 3), fixed(s.direction.polarDeg, 2),
+                             fixed(s.direction.azimuthDeg, 2), cell(s.direction.magnetAngleDeg, 2),
+                             vecCell(s.fieldCrystalT, 4)},
+                            figureCells(s.figures[static_cast<std::size_t>(request.targetClass)])));
+  }
+  return t;
+}
+
+json pointJson(const CentreModel& model, const PlannerSettings& settings, const Vec3& fieldCrystal,
+               const std::array<ClassFigures, kClassCount>& figures,
+               const std::vector<std::vector<SpinTransition>>& transitions) {
+  json classes = json::array();
+  for (std::size_t k = 0; k < settings.classes.size(); ++k) {
+    const int cls = settings.classes[k];
+    const auto axis = classAxisIndices(cls);
+    json c = {{"class", cls}, {"axis_crystal", {axis[0], axis[1], axis[2]}}};
+    c.update(figuresJson(figures[static_cast<std::size_t>(cls)]));
+    c["spin_transitions"] = spinTransitionsJson(transitions.at(k));
+    classes.push_back(c);
+  }
+  return {{"field_crystal_T", vec(fieldCrystal)},
+          {"field_lab_T", vec(model.setup().lab.toLab(fieldCrystal))},
+          {"lines", lineFamilyText(settings.family)},
+          {"drive_lab", vec(settings.driveLab.normalized())},
+          {"linewidth_GHz", model.linewidthGHz()},
+          {"classes", classes}};
+}
+
+Table pointTable(const PlannerSettings& settings, const std::array<ClassFigures, kClassCount>& figures) {
+  Table t;
+  t.headers = joined({"class", "drive GHz/T"}, kFigureHeaders);
+  for (int cls : settings.classes) {
+    const ClassFigures& f = figures[static_cast<std::size_t>(cls)];
+    t.rows.push_back(joined({std::to_string(cls), cell(f.driveGHzPerT, 4)}, figureCells(f)));
+  }
+  return t;
+}
+
+Table mapTable(const PlannerSettings& settings, const FigureMap& map) {
+  Table t;
+  t.headers = {"polar_deg", "azimuth_deg", "class"};
+  for (const auto& info : figureTable()) t.headers.emplace_back(info.key);
+  for (int i = 0; i < map.grid.polarCount; ++i)
+    for (int j = 0; j < map.grid.azimuthCount; ++j)
+      for (int cls : settings.classes) {
+        const ClassFigures& f = map.at(i, j, cls);
+        std::vector<std::string> row{exact(map.grid.polarDeg(i)), exact(map.grid.azimuthDeg(j)), std::to_string(cls)};
+        for (const auto& info : figureTable()) row.push_back(exact(figureValue(f, info.id)));
+        t.rows.push_back(std::move(row));
+      }
+  return t;
+}
+
+Table profileTable(const PlannerSettings& settings, const std::vector<ProfilePoint>& profile) {
+  Table t;
+  t.headers = {"magnitude_T", "class"};
+  for (const auto& info : figureTable()) t.headers.emplace_back(info.key);
+  for (const auto& p : profile)
+    for (int cls : settings.classes) {
+      std::vector<std::string> row{exact(p.magnitudeT), std::to_string(cls)};
+      for (const auto& info : figureTable()) row.push_back(exact(figureValue(p.figures[static_cast<std::size_t>(cls)], info.id)));
+      t.rows.push_back(std::move(row));
+    }
+  return t;
+}
+
+json profileJson(const PlannerSettings& settings, const Vec3& directionLab, const std::vector<ProfilePoint>& profile) {
+  json points = json::array();
+  for (const auto& p : profile) {
+    json classes = json::array();
+    for (int cls : settings.classes) {
+      json c = {{"class", cls}};
+      c.update(figuresJson(p.figures[static_cast<std::size_t>(cls)]));
+      classes.push_back(c);
+    }
+    points.push_back({{"magnitude_T", p.magnitudeT}, {"classes", classes}});
+  }
+  return {{"direction_lab", vec(directionLab.normalized())}, {"points", points}};
+}
+
+}  // namespace finestra

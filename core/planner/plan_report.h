@@ -1,0 +1,30 @@
+#pragma once
+// Machine (JSON) and human (table/CSV) forms of the planner's results.
+#include <nlohmann/json.hpp>
+
+#include "core/planner/plan_request.h"
+#include "core/report/table.h"
+
+namespace finestra {
+
+nlohmann::ordered_json figuresJson(const ClassFigures& f);
+nlohmann::ordered_json spinTransitionsJson(const std::vector<SpinTransition>& transitions);
+
+nlohmann::ordered_json planJson(const CentreModel& model, const PlanRequest& request, const PlanResult& result);
+/// One row per feasible interval (region) and one per ranked setting (best).
+Table planRegionTable(const PlanRequest& request, const PlanResult& result);
+Table planBestTable(const PlanRequest& request, const PlanResult& result);
+
+/// All figures of every selected class at one setting (field given in crystal axes).
+nlohmann::ordered_json pointJson(const CentreModel& model, const PlannerSettings& settings, const Vec3& fieldCrystal,
+                                 const std::array<ClassFigures, kClassCount>& figures,
+                                 const std::vector<std::vector<SpinTransition>>& transitions);
+Table pointTable(const PlannerSettings& settings, const std::array<ClassFigures, kClassCount>& figures);
+
+/// Long form: one row per grid direction and selected class.
+Table mapTable(const PlannerSettings& settings, const FigureMap& map);
+Table profileTable(const PlannerSettings& settings, const std::vector<ProfilePoint>& profile);
+nlohmann::ordered_json profileJson(const PlannerSettings& settings, const Vec3& directionLab,
+                                   const std::vector<ProfilePoint>& profile);
+
+}  // namespace finestra

@@ -1,0 +1,124 @@
+#include "core/planner/plan_request.h"
+
+#include <cmath>
+#include <limits>
+
+#include "core/common/errors.h"
+#include "core/io/json_reader.h"
+#include "core/io/project.h"
+
+namespace finestra {
+namespace {
+
+constexpr double kInf = std::numeric_limits<double>::infinity();
+
+double parseBound(const std::string& text, double open, const std::string& where) {
+  if (text.empty()) return open;
+  std::size_t used = 0;
+  double v = 0;
+  try {
+    v = std::stod(text, &used);
+  } catch (const std::exception&) {
+    throw InputError(where, "'" + text + "' is not a number");
+  }
+  if (used != text.size() || !std::isfinite(v)) throw InputError(where, "'" + text + "' is not a finite number");
+  return v;
+}
+
+void readReach(const JsonObjectReader& r, MagnetReach& reach) {
+  r.allowOnly({"kind", "step_deg", "normal_lab", "start_lab", "magnet_axis_lab", "rotation_axis_lab"});
+  if (r.has("kind")) reach.kind = parseReachKind(r.string("kind"), r.keyPath("kind"));
+  reach.stepDeg = r.number("step_deg", reach.stepDeg);
+  if (r.has("normal_lab")) reach.planeNormalLab = r.vec3("normal_lab");
+  if (r.has("start_lab")) reach.planeStartLab = r.vec3("start_lab");
+  if (r.has("magnet_axis_lab")) reach.magnetAxisLab = r.vec3("magnet_axis_lab");
+  if (r.has("rotation_axis_lab")) reach.rotationAxisLab = r.vec3("rotation_axis_lab");
+}
+
+void readConstraints(const JsonObjectReader& r, const nlohmann::json& object, std::vector<Constraint>& out) {
+  for (const auto& [key, value] : object.items()) {
+    const std::string path = r.keyPath(key);
+    Constraint c;
+    c.figure = parseFigure(key, path);
+    if (!value.is_array() || value.size() != 2)
+      throw InputError(path, "expected [min, max] (null for an open end)");
+    c.min = value[0].is_null() ? -kInf : finiteNumber(value[0], path + "[0]");
+    c.max = value[1].is_null() ? kInf : finiteNumber(value[1], path + "[1]");
+    if (c.min > c.max) throw InputError(path, "min is larger than max");
+    out.push_back(c);
+  }
+}
+
+}  // namespace
+
+ReachKind parseReachKind(const std::string& text, const std::string& where) {
+  if (text == "sphere") return ReachKind::Sphere;
+  if (text == "plane") return ReachKind::Plane;
+  if (text == "sample_rotation") return ReachKind::SampleRotation;
+  throw InputError(where, "unknown reach '" + text + "' (valid: sphere, plane, sample_rotation)");
+}
+
+Constraint parseConstraintText(const std::string& text, const std::string& where) {
+  const auto eq = text.find('=');
+  const auto colon = text.find(':', eq == std::string::npos ? 0 : eq);
+  if (eq == std::string::npos || colon == std::string::npos)
+    throw InputError(where, "expected FIGURE=MIN:MAX (either bound may be empty), got '" + text + "'");
+  Constraint c;
+  c.figure = parseFigure(text.substr(0, eq), where);
+  c.min = parseBound(text.substr(eq + 1, colon - eq - 1), -kInf, where);
+  c.max = parseBound(text.substr(colon + 1), kInf, where);
+  if (c.min > c.max) throw InputError(where, "min is larger than max in '" + text + "'");
+  return c;
+}
+
+PlanRequest parsePlanRequest(const std::string& text, const std::string& origin, PlanRequest request) {
+  const nlohmann::json doc = parseJsonStrict(text, origin);
+  try {
+    const JsonObjectReader r(doc, "");
+    r.allowOnly({"format", "version", "description", "target_class", "magnitudes_T", "magnitude_T", "drive_lab",
+                 "lines", "reach", "constraints", "objective", "best", "gap_scan_samples"});
+    if (r.string("format", "finestra-plan-request") != "finestra-plan-request")
+      throw InputError("format", "expected \"finestra-plan-request\"");
+    if (r.integer("version", 1) != 1) throw InputError("version", "only version 1 is known");
+    request.targetClass = r.integer("target_class", request.targetClass);
+    if (r.has("magnitude_T") && r.has("magnitudes_T"))
+      throw InputError("magnitude_T", "give either magnitude_T or magnitudes_T, not both");
+    if (r.has("magnitude_T")) request.magnitudesT = {r.number("magnitude_T")};
+    if (r.has("magnitudes_T")) {
+      const auto& list = r.raw("magnitudes_T");
+      if (!list.is_array() || list.empty()) throw InputError("magnitudes_T", "expected a non-empty array of numbers");
+      request.magnitudesT.clear();
+      for (std::size_t k = 0; k < list.size(); ++k)
+        request.magnitudesT.push_back(finiteNumber(list[k], "magnitudes_T[" + std::to_string(k) + "]"));
+    }
+    if (r.has("drive_lab")) request.settings.driveLab = r.vec3("drive_lab");
+    if (r.has("lines")) request.settings.family = parseLineFamily(r.string("lines"), "lines");
+    if (r.has("reach")) readReach(r.object("reach"), request.reach);
+    if (r.has("constraints")) {
+      const JsonObjectReader c = r.object("constraints");
+      request.constraints.clear();
+      readConstraints(c, r.raw("constraints"), request.constraints);
+    }
+    if (r.has("objective")) {
+      const JsonObjectReader o = r.object("objective");
+      o.allowOnly({"figure", "goal"});
+      if (o.has("figure")) request.objective.figure = parseFigure(o.string("figure"), o.keyPath("figure"));
+      const std::string goal = o.string("goal", request.objective.maximise ? "max" : "min");
+      if (goal != "max" && goal != "min") throw InputError(o.keyPath("goal"), "expected \"max\" or \"min\"");
+      request.objective.maximise = goal == "max";
+    }
+    request.bestCount = r.integer("best", request.bestCount);
+    request.settings.gapScanSamples = r.integer("gap_scan_samples", request.settings.gapScanSamples);
+  } catch (const InputError& e) {
+    const std::string where = e.where().empty() ? origin : origin + ": " + e.where();
+    throw InputError(where, std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+  }
+  request.settings.magnitudeT = request.magnitudesT.empty() ? 0.0 : request.magnitudesT.front();
+  return request;
+}
+
+PlanRequest readPlanRequestFile(const std::string& path, PlanRequest defaults) {
+  return parsePlanRequest(readTextFile(path), path, std::move(defaults));
+}
+
+}  // namespace finestra
