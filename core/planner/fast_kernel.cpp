@@ -199,6 +199,9 @@ PlannerKernel::GapResult PlannerKernel::smallestMiddleGap(const LinearHamiltonia
     const double g = k == 0 ? gapAtStart : gapAt(t);
     if (g < best.gapGHz) best = {g, t * magnitudeT}, bestIndex = k;
   }
+  // Usual case below the anticrossing field: the gap still shrinks at |B|. One probe just inside
+  // the end confirms it, and the bracket's minimum (assumed unimodal, like the search) is the end.
+  if (bestIndex == n && gapAt(1.0 - 1e-3 / n) > gapAtEnd) return best;
   // Golden-section search in the bracket around the coarse minimum.
   double lo = std::max(bestIndex - 1, 0) / static_cast<double>(n);
   double hi = std::min(bestIndex + 1, n) / static_cast<double>(n);
