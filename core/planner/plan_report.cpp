@@ -1,6 +1,7 @@
 #include "core/planner/plan_report.h"
 
 #include <cmath>
+#include <cstdio>
 
 namespace finestra {
 namespace {
@@ -17,7 +18,15 @@ std::string cell(double v, int decimals) {
   return fixed(v, decimals);
 }
 
-std::string cyclicityCell(double v) { return v >= kCyclicityCap ? "forbidden flip" : cell(v, 1); }
+std::string cyclicityCell(double v) {
+  if (v >= kCyclicityCap) return "forbidden flip";
+  if (v >= 1e6) {
+    char buf[32];
+    std::snprintf(buf, sizeof buf, "%.2e", v);
+    return buf;
+  }
+  return cell(v, 1);
+}
 // Undefined (degenerate) figures: "-" in tables, null in JSON.
 
 std::vector<std::string> figureCells(const ClassFigures& f) {
