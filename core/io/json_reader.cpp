@@ -14,6 +14,7 @@ JsonObjectReader::JsonObjectReader(const json& object, std::string path) : j_(ob
 }
 
 std::string JsonObjectReader::keyPath(const std::string& key) const {
+  if (key.empty()) return path_;
   return path_.empty() ? key : path_ + "." + key;
 }
 
@@ -111,6 +112,12 @@ json parseJsonStrict(const std::string& text, const std::string& origin) {
       static_cast<unsigned char>(text[1]) == 0xBB && static_cast<unsigned char>(text[2]) == 0xBF)
     return parseJsonStrict(text.substr(3), origin);
   if (text.find_first_not_of(" \t\r\n") == std::string::npos) throw InputError(origin, "file is empty");
+  // UTF-16 text starts with a byte-order mark FF FE / FE FF, or has a NUL byte beside its first
+  // ASCII character ('{' or a space) when it has none.
+  const auto byte = [&](std::size_t i) { return static_cast<unsigned char>(text[i]); };
+  if (text.size() >= 2 && ((byte(0) == 0xFF && byte(1) == 0xFE) || (byte(0) == 0xFE && byte(1) == 0xFF) ||
+                           ((byte(0) == 0) != (byte(1) == 0))))
+    throw InputError(origin, "file is UTF-16 encoded; save it as UTF-8");
   std::vector<std::set<std::string>> seen;  // keys of each open object
   std::string duplicate;
   json::parser_callback_t callback = [&](int, json::parse_event_t event, json& parsed) {
@@ -133,6 +140,14 @@ json parseJsonStrict(const std::string& text, const std::string& origin) {
     const auto cut = msg.find("syntax error");
     if (cut != std::string::npos) msg = msg.substr(cut);
     throw InputError(origin + ":" + lineColumn(text, e.byte == 0 ? 0 : e.byte - 1), "malformed JSON: " + msg);
+  } catch (const json::out_of_range& e) {
+    // Number overflow (e.g. 1e999): nlohmann names the literal; locate it for the line number.
+    const std::string msg = e.what();
+    const auto open = msg.find('\''), close = msg.rfind('\'');
+    const std::string literal = open != std::string::npos && close > open ? msg.substr(open + 1, close - open - 1) : "";
+    const std::size_t at = literal.empty() ? std::string::npos : text.find(literal);
+    throw InputError(origin + (at == std::string::npos ? "" : ":" + lineColumn(text, at)),
+                     "number " + literal + " is out of range (not a finite double)");
   }
   if (!duplicate.empty()) throw InputError(origin, "duplicate key '" + duplicate + "'");
   return doc;
