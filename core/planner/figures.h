@@ -24,7 +24,7 @@ struct PlannerSettings {
   LineFamily family = LineFamily::C;
   std::vector<int> classes{0, 1, 2, 3};///< selected classes (others are ignored everywhere)
   int gapScanSamples = 10;             ///< coarse samples of 0..|B| for the smallest level gap
-  int gapRefineSteps = 10;             ///< golden-section steps around the coarse minimum
+  int gapRefineSteps = 30;             ///< golden-section steps around an interior coarse minimum
 };
 
 /// Figures of one class. Cyclicity is capped at kCyclicityCap (an exactly forbidden spin flip).
