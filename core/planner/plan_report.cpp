@@ -43,7 +43,9 @@ std::vector<std::string> joined(std::vector<std::string> a, const std::vector<st
 }
 
 std::string vecCell(const Vec3& v, int decimals) {
-  return "[" + fixed(v.x(), decimals) + " " + fixed(v.y(), decimals) + " " + fixed(v.z(), decimals) + "]";
+  char buf[128];
+  std::snprintf(buf, sizeof buf, "[%.*f %.*f %.*f]", decimals, v.x(), decimals, v.y(), decimals, v.z());
+  return buf;
 }
 
 }  // namespace
