@@ -1,10 +1,18 @@
 #include "core/centre/parameters.h"
 
 #include <cmath>
+#include <sstream>
 
 #include "core/common/errors.h"
 
 namespace finestra {
+namespace {
+std::string shortNumber(double x) {
+  std::ostringstream out;
+  out << x;
+  return out.str();
+}
+}  // namespace
 
 const std::array<ParamInfo, kParamCount>& paramTable() {
   static const std::array<ParamInfo, kParamCount> table{{
@@ -71,6 +79,12 @@ void CentreParameters::validateForComputation() const {
   auto nonNegative = [&](Param p) {
     if (get(p) < 0) throw InputError(std::string(paramInfo(p).key), "must not be negative");
   };
+  // Every value is in natural units for its key (GHz, PHz/strain, MHz, ns ...), where real values
+  // stay far below 1e6; beyond 1e9 the sums of the Hamiltonian lose all precision.
+  for (const ParamInfo& info : paramTable())
+    if (known(info.id) && std::abs(get(info.id)) > 1e9)
+      throw InputError(std::string(info.key), "value " + shortNumber(get(info.id)) +
+                                                  " is outside the accepted range (magnitude at most 1e9)");
   positive(Param::ZplTHz);
   nonNegative(Param::LambdaG);
   nonNegative(Param::LambdaU);
@@ -78,7 +92,7 @@ void CentreParameters::validateForComputation() const {
   nonNegative(Param::DipoleRatio);
   if (known(Param::NuclearSpin)) {
     const double twoI = 2.0 * get(Param::NuclearSpin);
-    if (twoI < 0 || std::abs(twoI - std::round(twoI)) > 1e-9 || twoI > 19)
+    if (twoI < 0 || std::abs(twoI - std::round(twoI)) > 1e-9 || twoI > 9)
       throw InputError("nuclear_spin", "must be a multiple of 1/2 between 0 and 9/2");
   }
 }

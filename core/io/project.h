@@ -93,7 +93,8 @@ struct Project {
 Project parseProject(const std::string& text, const std::string& origin);
 /// Reads a project file; errors name the file (and line for syntax errors, key path otherwise).
 Project readProjectFile(const std::string& path);
-/// Serialises to the version-1 JSON layout (pretty-printed).
+/// Serialises to the version-1 JSON layout (pretty-printed). A non-finite number (JSON has none)
+/// throws InputError naming its key path.
 std::string projectToJson(const Project& project);
 /// Writes atomically: a temporary file in the same folder, flushed, then renamed over `path`.
 /// On failure the previous file is untouched and InputError names the path.

@@ -1,6 +1,7 @@
 // Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
 // non-finite numbers are errors naming the key path.
 #include <cmath>
+#include <filesystem>
 #include <fstream>
 #include <sstream>
 
@@ -32,6 +33,14 @@ SampleSetting readSample(const JsonObjectReader& r) {
   return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
+// Largest field accepted (T), the limit CentreModel enforces; checked here too so that the message
+// names the key and file.
+constexpr double kMaxFieldT = 1000.0;
+
+void requireFieldInRange(double magnitudeT, const std::string& where) {
+  if (magnitudeT > kMaxFieldT) throw InputError(where, "field is too large for this model (at most 1000 T)");
+}
+
 FieldSetting readField(const JsonObjectReader& r) {
   r.allowOnly({"magnitude_T", "polar_deg", "azimuth_deg", "vector_lab_T", "vector_crystal_T"});
   const int forms = int(r.has("magnitude_T")) + int(r.has("vector_lab_T")) + int(r.has("vector_crystal_T"));
@@ -43,14 +52,17 @@ FieldSetting readField(const JsonObjectReader& r) {
     f.form = FieldSetting::Form::Angles;
     f.magnitudeT = r.number("magnitude_T");
     if (f.magnitudeT < 0) throw InputError(r.keyPath("magnitude_T"), "must not be negative");
+    requireFieldInRange(f.magnitudeT, r.keyPath("magnitude_T"));
     f.polarDeg = r.number("polar_deg", 0.0);
     f.azimuthDeg = r.number("azimuth_deg", 0.0);
   } else if (r.has("vector_lab_T")) {
     f.form = FieldSetting::Form::VectorLab;
     f.vector = r.vec3("vector_lab_T");
+    requireFieldInRange(f.vector.norm(), r.keyPath("vector_lab_T"));
   } else {
     f.form = FieldSetting::Form::VectorCrystal;
     f.vector = r.vec3("vector_crystal_T");
+    requireFieldInRange(f.vector.norm(), r.keyPath("vector_crystal_T"));
   }
   return f;
 }
@@ -123,6 +135,10 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
+  if (s.kind == SweepKind::Magnitude) {
+    requireFieldInRange(s.from, r.keyPath("from"));
+    requireFieldInRange(s.to, r.keyPath("to"));
+  }
   if (r.has("plane_normal_lab")) s.planeNormalLab = r.vec3("plane_normal_lab");
   if (r.has("start_lab")) s.startLab = r.vec3("start_lab");
   if (s.kind == SweepKind::Angle) {
@@ -204,8 +220,8 @@ std::vector<Item> readArray(const JsonObjectReader& top, const char* key, ReadOn
 
 Project readDocument(const json& doc) {
   const JsonObjectReader top(doc, "");
-  top.allowOnly({"format", "version", "description", "centre", "sample", "field", "strain", "conditions",
-                 "classes", "sweeps", "measurements", "fit"});
+  // Format and version first: a newer file may carry keys this version does not know, and the user
+  // needs to hear "newer version", not "unknown key".
   if (top.string("format") != "finestra-project")
     throw InputError("format", "not a Finestra project (expected \"finestra-project\")");
   const int version = top.integer("version");
@@ -214,6 +230,8 @@ Project readDocument(const json& doc) {
                                     " is newer than this Finestra reads (version " + std::to_string(kProjectVersion) +
                                     "); open it with a newer Finestra");
   if (version < 1) throw InputError("version", "must be 1");
+  top.allowOnly({"format", "version", "description", "centre", "sample", "field", "strain", "conditions",
+                 "classes", "sweeps", "measurements", "fit"});
   Project p;
   p.description = top.string("description", "");
   p.centre = readCentre(top.object("centre"));
@@ -243,6 +261,8 @@ Project parseProject(const std::string& text, const std::string& origin) {
 }
 
 std::string readTextFile(const std::string& path) {
+  std::error_code ec;
+  if (std::filesystem::is_directory(path, ec)) throw InputError(path, "is a folder, not a file");
   std::ifstream in(path, std::ios::binary);
   if (!in) throw InputError(path, "cannot open file for reading");
   std::ostringstream ss;

@@ -1,4 +1,5 @@
 // Writing the version-1 project file, atomically.
+#include <cmath>
 #include <cstdio>
 #include <filesystem>
 #include <fstream>
@@ -49,6 +50,20 @@ ordered peak(const MeasuredPeak& p) {
   return o;
 }
 
+/// Key path of the first non-finite number in `j` ("" when all are finite). JSON has no NaN or
+/// infinity: written as null, the file could not be read back.
+std::string firstNonFinite(const ordered& j, const std::string& path) {
+  if (j.is_number_float()) return std::isfinite(j.get<double>()) ? "" : path;
+  if (j.is_array())
+    for (std::size_t i = 0; i < j.size(); ++i)
+      if (auto bad = firstNonFinite(j[i], path + "[" + std::to_string(i) + "]"); !bad.empty()) return bad;
+  if (j.is_object())
+    for (auto it = j.begin(); it != j.end(); ++it)
+      if (auto bad = firstNonFinite(it.value(), path.empty() ? it.key() : path + "." + it.key()); !bad.empty())
+        return bad;
+  return "";
+}
+
 }  // namespace
 
 std::string projectToJson(const Project& p) {
@@ -85,6 +100,8 @@ std::string projectToJson(const Project& p) {
   }
   doc["measurements"] = measurements;
   doc["fit"] = ordered{{"free", p.fit.free}, {"starts", p.fit.starts}};
+  if (const std::string bad = firstNonFinite(doc, ""); !bad.empty())
+    throw InputError(bad, "not a finite number; the project was not written");
   return doc.dump(2) + "\n";
 }
 
@@ -116,7 +133,13 @@ void writeFileAtomically(const std::string& path, const std::string& text) {
 }
 
 void writeProjectFile(const Project& project, const std::string& path) {
-  writeFileAtomically(path, projectToJson(project));
+  std::string text;
+  try {
+    text = projectToJson(project);
+  } catch (const InputError& e) {
+    throw InputError(path + ": " + e.where(), "not a finite number; nothing was written, the previous file is unchanged");
+  }
+  writeFileAtomically(path, text);
 }
 
 }  // namespace finestra

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cmath>
 #include <numbers>
+#include <sstream>
 
 #include "core/common/errors.h"
 #include "core/optics/dipole.h"
@@ -23,8 +24,21 @@ void validateConditions(const DetectionConditions& c) {
     throw InputError("conditions.analyser_lab", "must be a non-zero finite vector or null");
 }
 
+// Largest field and strain the model accepts. Far beyond any laboratory value (the engine is
+// tested to 30 T and 1e-2); past them the linear model means nothing and sums lose all precision.
+constexpr double kMaxFieldT = 1000.0;
+constexpr double kMaxStrain = 1.0;
+
+std::string shortNumber(double x) {
+  std::ostringstream out;
+  out << x;
+  return out.str();
+}
+
 void validateStrain(const StrainSetting& s) {
   if (!s.crystal.allFinite()) throw InputError("strain.crystal", "component is not a finite number");
+  if (s.crystal.cwiseAbs().maxCoeff() > kMaxStrain)
+    throw InputError("strain.crystal", "component above 1 (100 % strain) is outside the model");
   if ((s.crystal - s.crystal.transpose()).cwiseAbs().maxCoeff() > 1e-15)
     throw InputError("strain.crystal", "tensor must be symmetric");
   for (const EgStrain* e : {&s.extraGround, &s.extraExcited})
@@ -75,7 +89,15 @@ StrainTerms CentreModel::strainFor(Manifold m, int cls, const Mat3* strainOverri
 }
 
 ManifoldEigen CentreModel::levels(Manifold m, int cls, const Vec3& fieldCrystal, const Mat3* strainOverride) const {
-  return diagonalise(manifold(m), strainFor(m, cls, strainOverride), defectFrame(cls) * fieldCrystal);
+  if (!(fieldCrystal.norm() <= kMaxFieldT))
+    throw InputError("field", "magnitude " + shortNumber(fieldCrystal.norm()) +
+                                  " T is too large for this model (at most 1000 T)");
+  if (strainOverride && !(strainOverride->cwiseAbs().maxCoeff() <= kMaxStrain))
+    throw InputError("strain", "a strain component is not finite or above 1 (100 % strain)");
+  ManifoldEigen out = diagonalise(manifold(m), strainFor(m, cls, strainOverride), defectFrame(cls) * fieldCrystal);
+  if (!out.energies.allFinite() || !out.vectors.allFinite())
+    throw InputError("centre.parameters", "the computation gave non-finite energies (a value is far too large)");
+  return out;
 }
 
 std::vector<OpticalLine> CentreModel::lines(int cls, const ManifoldEigen& g, const ManifoldEigen& u) const {

@@ -32,7 +32,15 @@ SpectrumCurve computeSpectrum(const CentreModel& model, const std::vector<Weight
                               double from, double to, int points) {
   if (points < 2) throw InputError("points", "a spectrum needs at least 2 points");
   if (!std::isfinite(from) || !std::isfinite(to) || from == to)
-    throw InputError("range", "spectrum range must be two different finite numbers");
+    throw InputError("range", "spectrum range (from, to) must be two different finite numbers");
+  for (double end : {from, to}) {
+    try {
+      (void)toAbsoluteGHz(end, unit, model.zplGHz());
+    } catch (const InputError& e) {
+      throw InputError("range", "spectrum range (from, to) end " + std::string(e.what()).substr(e.where().size() + 2) +
+                                    " on unit " + std::string(spectralUnitKey(unit)));
+    }
+  }
   const double width = model.linewidthGHz();
   SpectrumCurve out;
   out.x.resize(static_cast<std::size_t>(points));
