@@ -1,0 +1,88 @@
+#pragma once
+// The document: the one place a project is edited. Every edit is a QUndoCommand holding the
+// project before and after (projects are small plain data), so undo/redo is exact. Edits made
+// during a slider drag share a merge token and collapse into one undo step. Listeners get one
+// coarse changed(Changes) signal saying which parts moved.
+#include <QObject>
+#include <QString>
+#include <QUndoStack>
+#include <functional>
+#include <optional>
+
+#include "core/io/project.h"
+#include "core/io/spectrum_csv.h"
+
+namespace finestra::ui {
+
+enum class Change : unsigned {
+  Centre = 1u << 0,
+  Sample = 1u << 1,
+  Field = 1u << 2,
+  Strain = 1u << 3,
+  Conditions = 1u << 4,
+  Classes = 1u << 5,
+  Sweeps = 1u << 6,
+  Measurements = 1u << 7,
+  MeasuredSpectrum = 1u << 8,
+  File = 1u << 9,  ///< path or modified state
+  Everything = 0x3FFu,
+};
+Q_DECLARE_FLAGS(Changes, Change)
+Q_DECLARE_OPERATORS_FOR_FLAGS(Changes)
+
+/// Changes that alter computed results (everything except file state and measured overlays).
+inline constexpr Changes kPhysicsChanges = Changes(Change::Centre) | Change::Sample | Change::Field | Change::Strain |
+                                           Change::Conditions | Change::Classes | Change::Sweeps;
+
+class ProjectDocument : public QObject {
+  Q_OBJECT
+public:
+  explicit ProjectDocument(QObject* parent = nullptr);
+
+  const Project& project() const { return project_; }
+  QUndoStack& undoStack() { return undoStack_; }
+  QString filePath() const { return filePath_; }
+  bool isModified() const { return !undoStack_.isClean() || modifiedOutsideUndo_; }
+  /// Incremented on every state change (edits, undo, redo, load): lets autosave skip idle time.
+  quint64 revision() const { return revision_; }
+
+  /// Applies `mutate` to a copy of the project and pushes it as one undo step named `text`.
+  /// A no-op edit (same file content) pushes nothing. With a non-empty `mergeKey`, consecutive
+  /// edits of the same key inside one drag (beginDrag/endDrag) merge into one step.
+  void edit(const QString& text, Changes what, const std::function<void(Project&)>& mutate,
+            const QString& mergeKey = {});
+  void beginDrag();
+  void endDrag();
+  quint64 dragToken() const { return dragToken_; }
+
+  /// Replaces the document (new/open/recover): clears undo history. `modified` marks a recovered
+  /// project as unsaved.
+  void reset(Project project, const QString& filePath, bool modified = false);
+  /// Throws InputError naming the file and key; the current document is untouched on error.
+  void open(const QString& path);
+  /// Atomic write; throws InputError naming the path; on success the document becomes clean.
+  void saveAs(const QString& path);
+
+  const std::optional<MeasuredSpectrum>& measuredSpectrum() const { return measuredSpectrum_; }
+  void setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectrum);
+
+  /// Used by the undo commands only.
+  void applyState(const Project& project, Changes what);
+
+Q_SIGNALS:
+  void changed(finestra::ui::Changes what);
+
+private:
+  Project project_;
+  QUndoStack undoStack_;
+  QString filePath_;
+  bool modifiedOutsideUndo_ = false;
+  quint64 revision_ = 0;
+  quint64 dragToken_ = 0;
+  quint64 nextDragToken_ = 1;
+  std::optional<MeasuredSpectrum> measuredSpectrum_;
+};
+
+}  // namespace finestra::ui
+
+Q_DECLARE_METATYPE(finestra::ui::Changes)

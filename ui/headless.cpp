@@ -1,0 +1,49 @@
+#include "ui/headless.h"
+
+#include <QFileInfo>
+#include <qcustomplot.h>
+
+#include "core/common/errors.h"
+#include "core/io/peak_csv.h"
+#include "ui/document.h"
+#include "ui/figure_export.h"
+
+namespace finestra::ui {
+
+void runHeadlessExport(const HeadlessExport& job) {
+  const ViewEntry* entry = findView(job.view);
+  if (!entry) {
+    QStringList keys;
+    for (const ViewEntry& v : viewCatalogue()) keys << v.key;
+    throw InputError("--export-view", "unknown view '" + job.view.toStdString() + "' (one of " + keys.join(", ").toStdString() + ")");
+  }
+  ProjectDocument document;
+  document.open(job.project);
+  if (!job.peaksCsv.isEmpty()) {
+    const auto sets = readPeakCsv(job.peaksCsv.toStdString());
+    document.edit("Import peaks", Change::Measurements,
+                  [&](Project& p) { p.measurements.insert(p.measurements.end(), sets.begin(), sets.end()); });
+  }
+  if (!job.spectrumCsv.isEmpty()) document.setMeasuredSpectrum(readSpectrumCsv(job.spectrumCsv.toStdString()));
+  ComputeRequest request;
+  request.project = document.project();
+  request.sweepIndex = job.display.sweepIndex;
+  request.unit = job.display.unit;
+  request.spectrumKind = job.display.spectrumKind;
+  const ResultPtr result = computeNow(request);
+  if (!result->error.isEmpty()) throw InputError(job.project.toStdString(), result->error.toStdString());
+  const ViewContext context{&document, nullptr};
+  std::unique_ptr<ResultView> view = entry->make(context);
+  view->applyDisplay(job.display);
+  view->resize(job.width, job.height);
+  view->showResult(result);
+  const QString suffix = QFileInfo(job.out).suffix().toLower();
+  if (suffix == "csv") {
+    exportTableCsv(view->dataTable(), job.out);
+    return;
+  }
+  if (!view->figure()) throw InputError("--export-view", "view '" + job.view.toStdString() + "' has no figure; use --out FILE.csv");
+  exportFigure(*view->figure(), job.out, job.width, job.height);
+}
+
+}  // namespace finestra::ui

@@ -1,0 +1,24 @@
+#pragma once
+// Figure export without a window: loads a project, computes on the calling thread, fills the
+// chosen view (from viewCatalogue()) and writes its figure (.png/.svg/.pdf) or data (.csv).
+#include <QString>
+#include <optional>
+
+#include "ui/result_view.h"
+
+namespace finestra::ui {
+
+struct HeadlessExport {
+  QString project;
+  QString view = "lines";
+  QString out;
+  int width = 1400, height = 900;
+  DisplaySettings display;
+  QString peaksCsv;     ///< optional measured peaks to add before computing
+  QString spectrumCsv;  ///< optional measured spectrum to overlay
+};
+
+/// Throws InputError naming the file, key or view at fault.
+void runHeadlessExport(const HeadlessExport& job);
+
+}  // namespace finestra::ui

@@ -1,0 +1,77 @@
+#pragma once
+// The main window: setup panel (left dock), result views as tabs (from viewCatalogue()), log
+// panel (bottom dock), status bar with compute time. Owns the document, the compute controller
+// and the autosaver; wires them together. Holds no physics.
+#include <QLabel>
+#include <QMainWindow>
+#include <QMenu>
+#include <QProgressBar>
+#include <QTabWidget>
+#include <memory>
+#include <vector>
+
+#include "ui/autosave.h"
+#include "ui/compute.h"
+#include "ui/document.h"
+#include "ui/result_view.h"
+
+namespace finestra::ui {
+
+class SetupPanel;
+class LogPanel;
+
+class MainWindow : public QMainWindow {
+  Q_OBJECT
+public:
+  /// `recoveryFolder` empty: the standard location.
+  explicit MainWindow(QString recoveryFolder = {}, QWidget* parent = nullptr);
+  ~MainWindow() override;
+
+  ProjectDocument& document() { return *document_; }
+  ComputeController& compute() { return *compute_; }
+  /// Opens a project; on error shows the message and keeps the current document. Returns success.
+  bool openProject(const QString& path);
+  bool importPeaks(const QString& path);
+  bool importSpectrum(const QString& path, std::optional<SpectralUnit> unit = std::nullopt);
+  /// Selects the tab of a view key ("levels", "lines", ...); false for an unknown key.
+  bool showView(const QString& key);
+  ResultView* view(const QString& key) const;
+  /// Offers orphaned autosaved copies for recovery (called once after start-up).
+  void offerRecovery();
+
+Q_SIGNALS:
+  /// A result was accepted and shown in every view.
+  void resultShown(finestra::ui::ResultPtr result);
+
+protected:
+  void closeEvent(QCloseEvent* event) override;
+
+private:
+  void buildMenus();
+  void requestCompute();
+  void onResult(const ResultPtr& result);
+  void updateTitle();
+  bool maybeSave();
+  bool save();
+  bool saveAs();
+  void addRecent(const QString& path);
+  void rebuildRecentMenu();
+  void exportFigure();
+  void exportData();
+  void applyDisplay(const DisplaySettings& display);
+  void onPeakClicked(int measurement, int peak);
+
+  std::unique_ptr<ProjectDocument> document_;
+  std::unique_ptr<ComputeController> compute_;
+  std::unique_ptr<Autosaver> autosaver_;
+  SetupPanel* setup_ = nullptr;
+  LogPanel* log_ = nullptr;
+  QTabWidget* tabs_ = nullptr;
+  std::vector<std::pair<QString, ResultView*>> views_;
+  QLabel* computeLabel_ = nullptr;
+  QProgressBar* busy_ = nullptr;
+  QMenu* recentMenu_ = nullptr;
+  DisplaySettings display_;
+};
+
+}  // namespace finestra::ui

@@ -1,0 +1,82 @@
+#pragma once
+// Extension point for result views. A view is a tab in the main window that receives every new
+// result and the display settings; it may offer a figure (QCustomPlot) and a data table for
+// export. To add a view, derive from ResultView and add ONE line to viewCatalogue() in
+// ui/view_catalogue.cpp: { "key", "Tab title", makeView<YourView> }. The key is also accepted by
+// the headless export (finestra --export-view key).
+#include <QString>
+#include <QWidget>
+#include <array>
+#include <functional>
+#include <memory>
+#include <vector>
+
+#include "core/report/table.h"
+#include "ui/compute.h"
+#include "ui/palette.h"
+
+class QCustomPlot;
+
+namespace finestra::ui {
+
+class ProjectDocument;
+class ComputeController;
+
+struct DisplaySettings {
+  SpectralUnit unit = SpectralUnit::GHzDetuning;
+  SpectrumKind spectrumKind = SpectrumKind::Emission;
+  QString palette = "Harbour";
+  int sweepIndex = 0;
+};
+
+/// What a view may use besides its results: the document (for edits such as moving the current
+/// point) and the compute controller (for on-demand lookups with the latest model).
+struct ViewContext {
+  ProjectDocument* document = nullptr;
+  ComputeController* compute = nullptr;
+};
+
+class ResultView : public QWidget {
+  Q_OBJECT
+public:
+  explicit ResultView(const ViewContext& context, QWidget* parent = nullptr) : QWidget(parent), context_(context) {}
+  /// Called with every accepted result (never a stale one).
+  virtual void showResult(const ResultPtr& result) = 0;
+  /// Called when units or palette change (a new result follows if the unit changed).
+  virtual void applyDisplay(const DisplaySettings& display) { display_ = display; }
+  /// The figure to export, or null for views without one.
+  virtual QCustomPlot* figure() { return nullptr; }
+  /// The view's data as a table for CSV export.
+  virtual Table dataTable() const = 0;
+
+Q_SIGNALS:
+  /// A measured peak was clicked: indices into project.measurements and its peaks.
+  void peakClicked(int measurement, int peak);
+
+protected:
+  const ViewContext& context() const { return context_; }
+  const DisplaySettings& display() const { return display_; }
+  const Palette& palette() const { return paletteByName(display_.palette); }
+
+private:
+  ViewContext context_;
+  DisplaySettings display_;
+};
+
+struct ViewEntry {
+  QString key;    ///< stable id for settings and the command line, e.g. "lines"
+  QString title;  ///< tab text
+  std::function<std::unique_ptr<ResultView>(const ViewContext&)> make;
+};
+
+template <typename View>
+std::unique_ptr<ResultView> makeView(const ViewContext& context) {
+  return std::make_unique<View>(context);
+}
+
+/// Every view, in tab order.
+const std::vector<ViewEntry>& viewCatalogue();
+/// Entry by key, or null.
+const ViewEntry* findView(const QString& key);
+
+}  // namespace finestra::ui

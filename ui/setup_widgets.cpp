@@ -1,0 +1,71 @@
+#include "ui/setup_widgets.h"
+
+#include <QHBoxLayout>
+#include <QSignalBlocker>
+#include <cmath>
+
+namespace finestra::ui {
+
+SliderSpin::SliderSpin(double minimum, double maximum, double step, int decimals, const QString& suffix, QWidget* parent)
+    : QWidget(parent), slider_(new QSlider(Qt::Horizontal, this)), spin_(new QDoubleSpinBox(this)), step_(step) {
+  auto* layout = new QHBoxLayout(this);
+  layout->setContentsMargins(0, 0, 0, 0);
+  layout->addWidget(slider_, 1);
+  layout->addWidget(spin_);
+  spin_->setRange(minimum, maximum);
+  spin_->setDecimals(decimals);
+  spin_->setSingleStep(step);
+  spin_->setSuffix(suffix);
+  spin_->setKeyboardTracking(false);
+  spin_->setMinimumWidth(96);
+  slider_->setRange(toSlider(minimum), toSlider(maximum));
+  connect(slider_, &QSlider::sliderPressed, this, &SliderSpin::dragStarted);
+  connect(slider_, &QSlider::sliderReleased, this, &SliderSpin::dragFinished);
+  connect(slider_, &QSlider::valueChanged, this, [this](int v) {
+    const double value = v * step_;
+    {
+      const QSignalBlocker block(spin_);
+      spin_->setValue(value);
+    }
+    Q_EMIT edited(value);
+  });
+  connect(spin_, &QDoubleSpinBox::valueChanged, this, [this](double v) {
+    {
+      const QSignalBlocker block(slider_);
+      slider_->setValue(toSlider(v));
+    }
+    Q_EMIT edited(v);
+  });
+}
+
+int SliderSpin::toSlider(double v) const { return static_cast<int>(std::lround(v / step_)); }
+
+void SliderSpin::setValue(double value) {
+  const QSignalBlocker a(slider_), b(spin_);
+  spin_->setValue(value);
+  slider_->setValue(toSlider(value));
+}
+
+Vec3Edit::Vec3Edit(double minimum, double maximum, int decimals, QWidget* parent) : QWidget(parent) {
+  auto* layout = new QHBoxLayout(this);
+  layout->setContentsMargins(0, 0, 0, 0);
+  for (auto& s : spins_) {
+    s = new QDoubleSpinBox(this);
+    s->setRange(minimum, maximum);
+    s->setDecimals(decimals);
+    s->setKeyboardTracking(false);
+    layout->addWidget(s);
+    connect(s, &QDoubleSpinBox::valueChanged, this, [this] { Q_EMIT edited(value()); });
+  }
+}
+
+Vec3 Vec3Edit::value() const { return Vec3(spins_[0]->value(), spins_[1]->value(), spins_[2]->value()); }
+
+void Vec3Edit::setValue(const Vec3& v) {
+  for (int i = 0; i < 3; ++i) {
+    const QSignalBlocker block(spins_[static_cast<std::size_t>(i)]);
+    spins_[static_cast<std::size_t>(i)]->setValue(v[i]);
+  }
+}
+
+}  // namespace finestra::ui

@@ -1,0 +1,50 @@
+#pragma once
+// Small input widgets of the setup panel: a slider coupled to a spin box (drags reported so the
+// document can merge them into one undo step) and a three-component vector editor.
+#include <QDoubleSpinBox>
+#include <QSlider>
+#include <QWidget>
+#include <array>
+
+#include "core/common/types.h"
+
+namespace finestra::ui {
+
+class SliderSpin : public QWidget {
+  Q_OBJECT
+public:
+  SliderSpin(double minimum, double maximum, double step, int decimals, const QString& suffix, QWidget* parent = nullptr);
+  double value() const { return spin_->value(); }
+  /// Sets the shown value without emitting edited().
+  void setValue(double value);
+  QDoubleSpinBox* spin() const { return spin_; }
+  QSlider* slider() const { return slider_; }
+
+Q_SIGNALS:
+  void edited(double value);
+  void dragStarted();
+  void dragFinished();
+
+private:
+  int toSlider(double v) const;
+  QSlider* slider_ = nullptr;
+  QDoubleSpinBox* spin_ = nullptr;
+  double step_ = 1;
+};
+
+class Vec3Edit : public QWidget {
+  Q_OBJECT
+public:
+  Vec3Edit(double minimum, double maximum, int decimals, QWidget* parent = nullptr);
+  Vec3 value() const;
+  /// Sets the shown vector without emitting edited().
+  void setValue(const Vec3& v);
+
+Q_SIGNALS:
+  void edited(const finestra::Vec3& value);
+
+private:
+  std::array<QDoubleSpinBox*, 3> spins_{};
+};
+
+}  // namespace finestra::ui

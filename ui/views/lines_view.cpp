@@ -1,0 +1,191 @@
+#include "ui/views/lines_view.h"
+
+#include <QToolTip>
+#include <QVBoxLayout>
+#include <algorithm>
+
+#include "core/optics/line_info.h"
+#include "core/report/reports.h"
+
+namespace finestra::ui {
+namespace {
+
+constexpr std::array<int, 4> kBinAlpha{255, 190, 120, 60};
+constexpr std::array<double, 4> kBinSize{6.5, 5.0, 3.8, 2.8};
+
+}  // namespace
+
+LinesView::LinesView(const ViewContext& context, QWidget* parent)
+    : ResultView(context, parent), plot_(new QCustomPlot(this)), filter_(new ClassFilterBar(this)) {
+  auto* layout = new QVBoxLayout(this);
+  layout->setContentsMargins(4, 4, 4, 4);
+  layout->addWidget(filter_);
+  layout->addWidget(plot_, 1);
+  stylePlot(*plot_);
+  plot_->legend->setVisible(true);
+  plot_->axisRect()->insetLayout()->setInsetAlignment(0, Qt::AlignTop | Qt::AlignRight);
+  plot_->setMouseTracking(true);
+  connect(plot_, &QCustomPlot::mouseMove, this, &LinesView::onMouseMove);
+  connect(plot_, &QCustomPlot::mousePress, this, &LinesView::onMousePress);
+  connect(filter_, &ClassFilterBar::filterChanged, this, &LinesView::rebuild);
+  filter_->applyPalette(palette(), true);
+}
+
+void LinesView::showResult(const ResultPtr& result) {
+  result_ = result;
+  rebuild();
+}
+
+void LinesView::applyDisplay(const DisplaySettings& display) {
+  ResultView::applyDisplay(display);
+  filter_->applyPalette(palette(), true);
+  rebuild();
+}
+
+void LinesView::rebuild() {
+  plot_->clearGraphs();
+  plot_->clearItems();
+  plot_->clearPlottables();
+  if (!result_ || !result_->error.isEmpty()) {
+    plot_->replot();
+    return;
+  }
+  plot_->xAxis->setLabel(QString::fromStdString(sweepAxisLabel(result_->sweep.kind)));
+  plot_->yAxis->setLabel(QString::fromStdString(spectralUnitLabel(result_->lines.unit)));
+  std::array<bool, 4> legendDone{};
+  // Weak bins first so strong points are drawn on top.
+  QVector<const LinePointGroup*> ordered;
+  for (const LinePointGroup& g : result_->lines.groups) ordered.push_back(&g);
+  std::stable_sort(ordered.begin(), ordered.end(), [](auto* a, auto* b) { return a->bin > b->bin; });
+  for (const LinePointGroup* g : ordered) {
+    if (!filter_->visible(g->cls)) continue;
+    QCPGraph* graph = plot_->addGraph();
+    graph->setLineStyle(QCPGraph::lsNone);
+    QColor colour = palette().color(g->cls);
+    colour.setAlpha(kBinAlpha[static_cast<std::size_t>(g->bin)]);
+    const double size = kBinSize[static_cast<std::size_t>(g->bin)];
+    if (g->axisParallel)
+      graph->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, colour, colour, size));
+    else
+      graph->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(colour, 1.2), Qt::NoBrush, size + 1));
+    graph->setData(g->x, g->y, true);
+    graph->setName(className(g->cls));
+    const bool showInLegend = !legendDone[static_cast<std::size_t>(g->cls)] && g->bin == 0;
+    if (showInLegend) legendDone[static_cast<std::size_t>(g->cls)] = true;
+    else graph->removeFromLegend();
+  }
+  // Polarisation key (grey, legend only).
+  for (bool parallel : {true, false}) {
+    QCPGraph* key = plot_->addGraph();
+    key->setLineStyle(QCPGraph::lsNone);
+    key->setScatterStyle(parallel ? QCPScatterStyle(QCPScatterStyle::ssDisc, Qt::darkGray, Qt::darkGray, 6.5)
+                                  : QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(Qt::darkGray, 1.2), Qt::NoBrush, 7.5));
+    key->setName(parallel ? tr("dipole \u2225 defect axis") : tr("dipole \u22a5 defect axis"));
+  }
+  if (!result_->peaks.isEmpty()) {
+    QCPGraph* peaks = plot_->addGraph();
+    peaks->setLineStyle(QCPGraph::lsNone);
+    peaks->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCrossSquare, QPen(palette().measured, 1.4), Qt::NoBrush, 9));
+    QVector<double> x, y, e;
+    for (const PeakMark& p : result_->peaks) {
+      x << p.x;
+      y << p.y;
+      e << p.yError;
+    }
+    peaks->setData(x, y);
+    peaks->setName(tr("measured peaks (click for nearest lines)"));
+    auto* bars = new QCPErrorBars(plot_->xAxis, plot_->yAxis);
+    bars->setDataPlottable(peaks);
+    bars->setData(e);
+    bars->setPen(QPen(palette().measured, 1.2));
+    bars->removeFromLegend();
+  }
+  plot_->rescaleAxes();
+  const QCPRange y = plot_->yAxis->range();
+  plot_->yAxis->setRange(y.lower - 0.05 * y.size(), y.upper + 0.05 * y.size());
+  if (result_->currentX) {
+    auto* marker = new QCPItemStraightLine(plot_);
+    marker->point1->setCoords(*result_->currentX, 0);
+    marker->point2->setCoords(*result_->currentX, 1);
+    marker->setPen(QPen(palette().marker, 1.2, Qt::DashLine));
+  }
+  plot_->replot();
+}
+
+qsizetype LinesView::peakAt(const QPointF& pixel, double radius) const {
+  qsizetype best = -1;
+  double bestDistance = radius;
+  for (qsizetype i = 0; i < result_->peaks.size(); ++i) {
+    const PeakMark& p = result_->peaks[i];
+    const double dx = plot_->xAxis->coordToPixel(p.x) - pixel.x();
+    const double dy = plot_->yAxis->coordToPixel(p.y) - pixel.y();
+    const double d = std::hypot(dx, dy);
+    if (d < bestDistance) {
+      bestDistance = d;
+      best = i;
+    }
+  }
+  return best;
+}
+
+void LinesView::onMouseMove(QMouseEvent* event) {
+  if (!result_ || !result_->model || result_->sweepResult.x.empty()) return;
+  const QPointF pos = event->position();
+  if (const qsizetype p = peakAt(pos, 8); p >= 0) {
+    const PeakMark& mark = result_->peaks[p];
+    const MeasurementSet& m = result_->project.measurements[static_cast<std::size_t>(mark.measurement)];
+    QToolTip::showText(event->globalPosition().toPoint(),
+                       tr("measured: %1, peak %2\n%3 \u00b1 %4\nclick to list the nearest predicted lines")
+                           .arg(QString::fromStdString(m.name))
+                           .arg(mark.peak + 1)
+                           .arg(mark.y, 0, 'f', 4)
+                           .arg(mark.yError, 0, 'g', 3),
+                       plot_);
+    return;
+  }
+  const auto& xs = result_->sweepResult.x;
+  const double x = plot_->xAxis->pixelToCoord(pos.x());
+  const auto it = std::lower_bound(xs.begin(), xs.end(), x);
+  std::size_t k = static_cast<std::size_t>(std::clamp<std::ptrdiff_t>(it - xs.begin(), 0, static_cast<std::ptrdiff_t>(xs.size()) - 1));
+  if (k > 0 && std::abs(xs[k - 1] - x) < std::abs(xs[k] - x)) --k;
+  if (std::abs(plot_->xAxis->coordToPixel(xs[k]) - pos.x()) > 10) {
+    QToolTip::hideText();
+    return;
+  }
+  const double zpl = result_->model->zplGHz();
+  double best = 8.0;
+  const OpticalLine* bestLine = nullptr;
+  int bestClass = 0;
+  for (const ClassSweep& c : result_->sweepResult.classes) {
+    if (!filter_->visible(c.cls)) continue;
+    for (const OpticalLine& l : c.lines[k]) {
+      if (l.intensity < kIntensityBinFloors.back() * result_->lines.maxIntensity) continue;
+      const double py = plot_->yAxis->coordToPixel(fromAbsoluteGHz(l.frequencyGHz, result_->lines.unit, zpl));
+      if (std::abs(py - pos.y()) < best) {
+        best = std::abs(py - pos.y());
+        bestLine = &l;
+        bestClass = c.cls;
+      }
+    }
+  }
+  if (!bestLine) {
+    QToolTip::hideText();
+    return;
+  }
+  QToolTip::showText(event->globalPosition().toPoint(),
+                     tr("x = %1\n").arg(xs[k], 0, 'g', 6) + QString::fromStdString(describeLine(bestClass, *bestLine, zpl)),
+                     plot_);
+}
+
+void LinesView::onMousePress(QMouseEvent* event) {
+  if (!result_ || event->button() != Qt::LeftButton) return;
+  if (const qsizetype p = peakAt(event->position(), 8); p >= 0)
+    Q_EMIT peakClicked(result_->peaks[p].measurement, result_->peaks[p].peak);
+}
+
+Table LinesView::dataTable() const {
+  if (!result_ || !result_->error.isEmpty()) return {};
+  return sweepLinesTable(result_->sweep, result_->sweepResult);
+}
+
+}  // namespace finestra::ui

@@ -1,0 +1,32 @@
+#pragma once
+// Line map: every line of every shown class against the sweep variable on the chosen spectral
+// axis. Colour = class, filled disc = dipole mostly along the defect axis, open circle = mostly
+// perpendicular, marker size and opacity = intensity bin. Measured peaks sit on top with their
+// uncertainty; clicking one asks for the nearest predicted lines.
+#include "ui/result_view.h"
+#include "ui/views/plot_helpers.h"
+
+namespace finestra::ui {
+
+class LinesView : public ResultView {
+  Q_OBJECT
+public:
+  explicit LinesView(const ViewContext& context, QWidget* parent = nullptr);
+  void showResult(const ResultPtr& result) override;
+  void applyDisplay(const DisplaySettings& display) override;
+  QCustomPlot* figure() override { return plot_; }
+  Table dataTable() const override;
+
+private:
+  void rebuild();
+  void onMouseMove(QMouseEvent* event);
+  void onMousePress(QMouseEvent* event);
+  /// Nearest measured peak to a pixel position within `radius` pixels, as an index into peaks.
+  qsizetype peakAt(const QPointF& pixel, double radius) const;
+
+  QCustomPlot* plot_ = nullptr;
+  ClassFilterBar* filter_ = nullptr;
+  ResultPtr result_;
+};
+
+}  // namespace finestra::ui
