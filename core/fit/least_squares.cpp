@@ -74,6 +74,7 @@ LeastSquaresResult minimiseLeastSquares(const FitModel& model, const Eigen::Vect
   lm.setXtol(options.tolerance);
   lm.setFtol(options.tolerance);
   lm.setGtol(0.0);
+  lm.setFactor(options.stepBound);
   Eigen::VectorXd x = start;
   const auto status = lm.minimize(x);
   model.residuals(x, r);

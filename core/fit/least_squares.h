@@ -21,6 +21,9 @@ std::string leastSquaresStatusText(LeastSquaresStatus status);
 struct LeastSquaresOptions {
   int maxEvaluations = 400;
   double tolerance = 1e-10;  ///< relative tolerance on the step and on the χ² reduction
+  /// Initial bound of the scaled step (MINPACK "factor"); small values keep the first steps,
+  /// taken while the assignment may still be wrong, from leaping to a distant minimum.
+  double stepBound = 1.0;
 };
 
 struct LeastSquaresResult {

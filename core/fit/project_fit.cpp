@@ -27,7 +27,17 @@ struct StartOutcome {
 // and flip strain signs, because line positions fix E-strain only up to such symmetries.
 FitState startState(const FitProblem& problem, int index, unsigned seed) {
   FitState s = problem.start;
-  if (index == 0) return s;
+  if (index == 0) {
+    // Lines depend on E-strain through its magnitude, so at zero strain (and the azimuth at zero
+    // tilt) the first derivative vanishes by symmetry: start just off those points.
+    for (const FitParameterSpec& spec : problem.free) {
+      if (fitValue(s, spec) != 0) continue;
+      if (spec.kind == FitParamKind::EgMagnitude) setFitValue(s, spec, 5.0);
+      if (spec.kind == FitParamKind::TiltAngle) setFitValue(s, spec, 0.5);
+      if (spec.kind == FitParamKind::StrainComponent) setFitValue(s, spec, 2.0 * spec.scale);
+    }
+    return s;
+  }
   std::mt19937_64 rng(static_cast<std::uint64_t>(seed) * 1000003ULL + static_cast<std::uint64_t>(index));
   std::uniform_real_distribution<double> unit(-1.0, 1.0), fraction(0.0, 1.0);
   for (const FitParameterSpec& spec : problem.free) {
@@ -39,7 +49,7 @@ FitState startState(const FitProblem& problem, int index, unsigned seed) {
       case FitParamKind::TiltAngle: v = 3.0 * fraction(rng); break;
       case FitParamKind::TiltAzimuth: v = 360.0 * fraction(rng); break;
       case FitParamKind::ZplOffset: v = base + 3.0 * unit(rng); break;
-      case FitParamKind::EgMagnitude: v = 30.0 * fraction(rng); break;
+      case FitParamKind::EgMagnitude: v = base > 0 ? base * (1.0 + 0.1 * unit(rng)) : 30.0 * fraction(rng); break;
       case FitParamKind::EgAngle: v = 360.0 * fraction(rng); break;
       case FitParamKind::Centre: v = base + (base != 0 ? 0.03 * std::abs(base) : spec.scale) * unit(rng); break;
     }
@@ -53,17 +63,25 @@ StartOutcome runStart(const std::shared_ptr<const FitProblem>& problem, FitState
   for (const auto& p : problem->peaks) minSigma = std::min(minSigma, p.sigmaGHz);
   // τ starts at the typical distance between peaks and predicted lines and shrinks fourfold per
   // round: early rounds pair peaks with lines by overall pattern, late rounds by σ.
-  double tau = medianNearestDistance(*problem, state);
+  double tau = 2.0 * medianNearestDistance(*problem, state);
   if (tau < 0.5 * minSigma) tau = 0;
   StartOutcome out;
   out.x = variablesFromState(*problem, state);
   std::optional<std::vector<std::optional<LineRef>>> previous;
+  int roundsAtTau = 0;
   for (int round = 0; round < o.maxRounds; ++round) {
     const PeakAssignments assigned = assignPeaks(*problem, state, tau, o.assignment);
-    if (tau == 0 && previous && *previous == assigned.lines) {
+    const bool same = previous && *previous == assigned.lines;
+    if (same && tau == 0) {
       out.stable = true;
       out.cost = assigned.cost;
       break;
+    }
+    // At each τ the assignment is iterated until it settles (or a few rounds pass), then τ halves.
+    if (same || roundsAtTau >= o.roundsPerTau) {
+      tau = tau * o.annealFactor < 0.5 * minSigma ? 0.0 : tau * o.annealFactor;
+      roundsAtTau = 0;
+      if (same) continue;
     }
     const PeakFitModel model(problem, assigned.lines);
     out.solver = minimiseLeastSquares(model, out.x, o.solver);
@@ -71,10 +89,7 @@ StartOutcome runStart(const std::shared_ptr<const FitProblem>& problem, FitState
     state = stateFromVariables(*problem, out.x);
     previous = assigned.lines;
     out.rounds = round + 1;
-    if (tau > 0) {
-      tau *= 0.25;
-      if (tau < 0.5 * minSigma) tau = 0;
-    }
+    ++roundsAtTau;
   }
   if (!out.stable) out.cost = assignPeaks(*problem, state, 0, o.assignment).cost;
   out.state = state;

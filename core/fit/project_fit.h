@@ -16,7 +16,9 @@ struct FitOptions {
   std::optional<int> starts;  ///< default: project.fit.starts
   std::optional<std::vector<std::string>> free;  ///< default: project.fit.free
   unsigned seed = 1;          ///< random starts are reproducible for a given seed
-  int maxRounds = 40;         ///< assignment/fit alternations per start
+  int maxRounds = 60;         ///< assignment/fit alternations per start
+  int roundsPerTau = 3;       ///< alternations at one model allowance τ before it is lowered
+  double annealFactor = 0.5;  ///< τ is multiplied by this when lowered
   int threads = 0;            ///< 0: all cores
   AssignmentOptions assignment;
   LeastSquaresOptions solver;
