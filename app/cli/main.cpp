@@ -5,6 +5,7 @@
 #include <map>
 
 #include "app/cli/commands.h"
+#include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
 #include "core/common/errors.h"
 
@@ -53,6 +54,14 @@ int main(int argc, char** argv) {
   auto* planCmd = app.add_subcommand("plan", "magnet planner: figures of merit over field directions, feasible region, best settings");
   addProjectOptions(planCmd, common);
   addPlanOptions(planCmd, plan);
+  FitCommandOptions fitOptions;
+  auto* fitCmd = app.add_subcommand("fit", "assign measured peaks to lines and fit the chosen parameters (exit 4: not converged)");
+  addProjectOptions(fitCmd, common);
+  addFitOptions(fitCmd, fitOptions);
+  StrainCommandOptions strainOptions;
+  auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
+  addProjectOptions(strainCmd, common);
+  addStrainOptions(strainCmd, strainOptions);
 
   try {
     app.parse(argc, argv);
@@ -66,6 +75,8 @@ int main(int argc, char** argv) {
     if (*spec) return runSpectrum(common, spectrum);
     if (*sw) return runSweep(common, sweep);
     if (*planCmd) return runPlan(common, plan);
+    if (*fitCmd) return runFit(common, fitOptions);
+    if (*strainCmd) return runStrain(common, strainOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;
