@@ -31,7 +31,7 @@ Autosaver::Autosaver(ProjectDocument& document, QString folder, int intervalMs, 
   lock_ = std::make_unique<QLockFile>(lockFile(folder_, sessionId_));
   lock_->setStaleLockTime(0);
   if (!lock_->tryLock(100)) spdlog::warn("autosave: could not take the session lock in {}", folder_.toStdString());
-  savedRevision_ = document_.revision();
+  savedRevision_ = document_.isModified() ? ~quint64{0} : document_.revision();
   connect(&timer_, &QTimer::timeout, this, &Autosaver::saveNow);
   timer_.start(intervalMs);
   connect(&document_, &ProjectDocument::changed, this, [this](Changes what) {
@@ -49,7 +49,7 @@ void Autosaver::saveNow() {
   try {
     writeFileAtomically(originFile(folder_, sessionId_).toStdString(), document_.filePath().toStdString());
     writeFileAtomically(projectFile(folder_, sessionId_).toStdString(), projectToJson(document_.project()));
-    savedRevision_ = document_.revision();
+    savedRevision_ = document_.isModified() ? ~quint64{0} : document_.revision();
     spdlog::debug("autosaved to {}", projectFile(folder_, sessionId_).toStdString());
   } catch (const InputError& e) {
     spdlog::warn("autosave failed: {}", e.what());

@@ -35,6 +35,7 @@ private:
 }  // namespace
 
 ProjectDocument::ProjectDocument(QObject* parent) : QObject(parent) {
+  qRegisterMetaType<Changes>("finestra::ui::Changes");
   connect(&undoStack_, &QUndoStack::cleanChanged, this, [this] { Q_EMIT changed(Change::File); });
 }
 

@@ -60,6 +60,7 @@ MainWindow::MainWindow(QString recoveryFolder, QWidget* parent)
   logDock->setWidget(log_);
   addDockWidget(Qt::BottomDockWidgetArea, logDock);
   resizeDocks({logDock}, {110}, Qt::Vertical);
+  resizeDocks({setupDock}, {580}, Qt::Horizontal);
 
   computeLabel_ = new QLabel(tr("ready"));
   busy_ = new QProgressBar;

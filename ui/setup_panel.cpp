@@ -68,7 +68,8 @@ SetupPanel::SetupPanel(ProjectDocument& document, QWidget* parent) : QScrollArea
   layout->addStretch(1);
   setWidget(content);
   setWidgetResizable(true);
-  setMinimumWidth(420);
+  setMinimumWidth(560);
+  setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   connect(&document_, &ProjectDocument::changed, this, &SetupPanel::refresh);
   refresh(Change::Everything);
 }
@@ -140,9 +141,10 @@ QWidget* SetupPanel::buildSample() {
   sampleMessage_ = new QLabel;
   sampleMessage_->setWordWrap(true);
   sampleMessage_->setStyleSheet("color:#A02030");
-  form->addRow(tr("Surface normal = lab z (crystal dir.)"), normal_);
-  form->addRow(tr("In-plane reference = lab x"), inPlane_);
+  form->addRow(tr("Normal (lab z)"), normal_);
+  form->addRow(tr("In-plane (lab x)"), inPlane_);
   form->addRow(sampleMessage_);
+  form->addRow(new QLabel(tr("Both as crystal directions, e.g. [001] and [110].")));
   auto apply = [this] {
     const Vec3 n = normal_->value(), x = inPlane_->value();
     try {

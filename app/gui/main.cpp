@@ -24,6 +24,7 @@ int main(int argc, char** argv) {
     if (QByteArray(argv[i]) == "--export-view") headless = true;
   if (headless && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
   QApplication app(argc, argv);
+  Q_INIT_RESOURCE(finestra_ui);
   QApplication::setOrganizationName("Finestra");
   QApplication::setApplicationName("finestra");
   QApplication::setApplicationVersion("0.1.0");

@@ -11,7 +11,7 @@ namespace finestra::ui {
 namespace {
 
 constexpr std::array<int, 4> kBinAlpha{255, 190, 120, 60};
-constexpr std::array<double, 4> kBinSize{6.5, 5.0, 3.8, 2.8};
+constexpr std::array<double, 4> kBinSize{4.5, 3.6, 2.8, 2.2};
 
 }  // namespace
 
@@ -69,10 +69,15 @@ void LinesView::rebuild() {
     else
       graph->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(colour, 1.2), Qt::NoBrush, size + 1));
     graph->setData(g->x, g->y, true);
-    graph->setName(className(g->cls));
-    const bool showInLegend = !legendDone[static_cast<std::size_t>(g->cls)] && g->bin == 0;
-    if (showInLegend) legendDone[static_cast<std::size_t>(g->cls)] = true;
-    else graph->removeFromLegend();
+    graph->removeFromLegend();
+    legendDone[static_cast<std::size_t>(g->cls)] = true;
+  }
+  for (int c = 0; c < 4; ++c) {
+    if (!legendDone[static_cast<std::size_t>(c)]) continue;
+    QCPGraph* key = plot_->addGraph();  // legend entry only
+    key->setLineStyle(QCPGraph::lsNone);
+    key->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssDisc, palette().color(c), palette().color(c), 7));
+    key->setName(className(c));
   }
   // Polarisation key (grey, legend only).
   for (bool parallel : {true, false}) {
@@ -85,7 +90,7 @@ void LinesView::rebuild() {
   if (!result_->peaks.isEmpty()) {
     QCPGraph* peaks = plot_->addGraph();
     peaks->setLineStyle(QCPGraph::lsNone);
-    peaks->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCrossSquare, QPen(palette().measured, 1.4), Qt::NoBrush, 9));
+    peaks->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCross, QPen(palette().measured, 1.3), Qt::NoBrush, 7));
     QVector<double> x, y, e;
     for (const PeakMark& p : result_->peaks) {
       x << p.x;

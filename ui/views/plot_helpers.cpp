@@ -1,6 +1,8 @@
 #include "ui/views/plot_helpers.h"
 
+#include <QCheckBox>
 #include <QLabel>
+#include <QPainter>
 
 #include "core/crystal/frames.h"
 
@@ -33,12 +35,11 @@ ClassFilterBar::ClassFilterBar(QWidget* parent) : QWidget(parent), layout_(new Q
   layout_->setContentsMargins(0, 0, 0, 0);
   layout_->addWidget(new QLabel(tr("Show:"), this));
   for (int c = 0; c < 4; ++c) {
-    auto* b = new QToolButton(this);
-    b->setCheckable(true);
+    auto* b = new QCheckBox(this);
     b->setChecked(true);
     b->setText(className(c));
     b->setToolTip(tr("Show or hide orientation class %1").arg(c));
-    connect(b, &QToolButton::toggled, this, &ClassFilterBar::filterChanged);
+    connect(b, &QCheckBox::toggled, this, &ClassFilterBar::filterChanged);
     layout_->addWidget(b);
     buttons_[static_cast<std::size_t>(c)] = b;
   }
@@ -47,13 +48,15 @@ ClassFilterBar::ClassFilterBar(QWidget* parent) : QWidget(parent), layout_(new Q
 
 void ClassFilterBar::applyPalette(const Palette& palette, bool colourByClass) {
   for (int c = 0; c < 4; ++c) {
-    QToolButton* b = buttons_[static_cast<std::size_t>(c)];
-    if (colourByClass)
-      b->setStyleSheet(QStringLiteral("QToolButton{border-left:6px solid %1; padding:2px 6px;}"
-                                      "QToolButton:!checked{color:#999;}")
-                           .arg(palette.color(c).name()));
-    else
-      b->setStyleSheet(QStringLiteral("QToolButton{padding:2px 6px;} QToolButton:!checked{color:#999;}"));
+    QCheckBox* b = buttons_[static_cast<std::size_t>(c)];
+    QPixmap swatch(14, 14);
+    swatch.fill(colourByClass ? palette.color(c) : QColor(Qt::transparent));
+    if (!colourByClass) {
+      QPainter painter(&swatch);
+      painter.setPen(QPen(Qt::black, 1.6, classPenStyle(c)));
+      painter.drawLine(0, 7, 14, 7);
+    }
+    b->setIcon(QIcon(swatch));
   }
 }
 

@@ -1,7 +1,7 @@
 #pragma once
 // Shared look and small helpers of the plot views.
 #include <QHBoxLayout>
-#include <QToolButton>
+#include <QCheckBox>
 #include <QWidget>
 #include <array>
 #include <qcustomplot.h>
@@ -28,7 +28,7 @@ Q_SIGNALS:
   void filterChanged();
 
 private:
-  std::array<QToolButton*, 4> buttons_{};
+  std::array<QCheckBox*, 4> buttons_{};
   QHBoxLayout* layout_ = nullptr;
 };
 
