@@ -9,6 +9,7 @@
 #include "core/common/errors.h"
 #include "ui/headless.h"
 #include "ui/main_window.h"
+#include "ui/result_view.h"
 
 namespace {
 
@@ -19,10 +20,13 @@ finestra::SpectralUnit unitOption(const QString& key) {
 }  // namespace
 
 int main(int argc, char** argv) {
-  bool headless = false;
-  for (int i = 1; i < argc; ++i)
-    if (QByteArray(argv[i]) == "--export-view") headless = true;
-  if (headless && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
+  bool headless = false, windowless = false;  // windowless: help and version need no display either
+  for (int i = 1; i < argc; ++i) {
+    const QByteArray arg(argv[i]);
+    if (arg == "--export-view") headless = true;
+    if (arg == "--help" || arg == "-h" || arg == "--version" || arg == "-v") windowless = true;
+  }
+  if ((headless || windowless) && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
   QApplication app(argc, argv);
   Q_INIT_RESOURCE(finestra_ui);
   QApplication::setOrganizationName("Finestra");
@@ -35,7 +39,9 @@ int main(int argc, char** argv) {
   parser.addVersionOption();
   parser.addPositionalArgument("project", "Project file to open.", "[project.json]");
   const QCommandLineOption projectOption("project", "Project file.", "file");
-  const QCommandLineOption viewOption("export-view", "Export one view without a window: levels, lines, spectrum, table.", "view");
+  QStringList viewKeys;
+  for (const finestra::ui::ViewEntry& v : finestra::ui::viewCatalogue()) viewKeys << v.key;
+  const QCommandLineOption viewOption("export-view", "Export one view without a window: " + viewKeys.join(", ") + ".", "view");
   const QCommandLineOption outOption("out", "Output file of --export-view or --screenshot (.png, .svg, .pdf, .csv).", "file");
   const QCommandLineOption unitOpt("unit", "Spectral axis: GHz_detuning, GHz, THz, nm_vac, nm_air, meV, cm-1.", "unit", "GHz_detuning");
   const QCommandLineOption sweepOption("sweep", "Index of the project sweep used for the plots.", "index", "0");

@@ -1,0 +1,11 @@
+#!/usr/bin/env bash
+# Installs the Debian 12 packages (scripts/install-deps.sh), builds everything in Release
+# (build/release: GUI, CLI, tests, benchmarks) and runs every test with ctest.
+# Exits non-zero on any build or test failure. Usage: scripts/run-tests.sh
+set -euo pipefail
+root="$(cd "$(dirname "$0")/.." && pwd)"
+cd "$root"
+if [[ "${FINESTRA_SKIP_DEPS:-0}" != 1 ]]; then scripts/install-deps.sh; fi
+cmake --preset release
+cmake --build --preset release -j"$(nproc)"
+QT_QPA_PLATFORM=offscreen ctest --preset release -j"$(nproc)" --timeout 900
