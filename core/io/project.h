@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "core/model/centre_model.h"
+#include "core/io/spectrum_csv.h"
 #include "core/units/spectral_units.h"
 
 namespace finestra {
@@ -86,6 +87,8 @@ struct Project {
   std::vector<SweepSpec> sweeps;
   std::vector<MeasurementSet> measurements;
   FitSettings fit;
+  /// An imported measured spectrum, kept in the project so that it survives save and open.
+  std::optional<MeasuredSpectrum> measuredSpectrum;
   std::string description;  ///< free text, e.g. the scenario of a demo project
 };
 

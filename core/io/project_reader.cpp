@@ -207,6 +207,29 @@ FitSettings readFit(const JsonObjectReader& r) {
   return f;
 }
 
+// Numbers of a JSON array at `path`, each finite.
+std::vector<double> readNumbers(const json& arr, const std::string& path) {
+  if (!arr.is_array()) throw InputError(path, "expected an array of numbers");
+  std::vector<double> out;
+  out.reserve(arr.size());
+  for (std::size_t i = 0; i < arr.size(); ++i) out.push_back(finiteNumber(arr[i], path + "[" + std::to_string(i) + "]"));
+  return out;
+}
+
+MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
+  r.allowOnly({"name", "unit", "position", "signal"});
+  MeasuredSpectrum m;
+  m.name = r.string("name", "");
+  m.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
+  m.position = readNumbers(r.raw("position"), r.keyPath("position"));
+  m.signal = readNumbers(r.raw("signal"), r.keyPath("signal"));
+  if (m.position.size() != m.signal.size())
+    throw InputError(r.keyPath("signal"), "has " + std::to_string(m.signal.size()) + " values but position has " +
+                                              std::to_string(m.position.size()));
+  if (m.position.size() < 2) throw InputError(r.keyPath("position"), "needs at least two points");
+  return m;
+}
+
 template <typename Item, typename ReadOne>
 std::vector<Item> readArray(const JsonObjectReader& top, const char* key, ReadOne readOne) {
   std::vector<Item> out;
@@ -231,7 +254,7 @@ Project readDocument(const json& doc) {
                                     "); open it with a newer Finestra");
   if (version < 1) throw InputError("version", "must be 1");
   top.allowOnly({"format", "version", "description", "centre", "sample", "field", "strain", "conditions",
-                 "classes", "sweeps", "measurements", "fit"});
+                 "classes", "sweeps", "measurements", "fit", "measured_spectrum"});
   Project p;
   p.description = top.string("description", "");
   p.centre = readCentre(top.object("centre"));
@@ -243,6 +266,7 @@ Project readDocument(const json& doc) {
   p.sweeps = readArray<SweepSpec>(top, "sweeps", readSweep);
   p.measurements = readArray<MeasurementSet>(top, "measurements", readMeasurement);
   if (!top.isNull("fit")) p.fit = readFit(top.object("fit"));
+  if (!top.isNull("measured_spectrum")) p.measuredSpectrum = readMeasuredSpectrum(top.object("measured_spectrum"));
   (void)LabFrame(p.sample.normal, p.sample.inPlaneX, "sample");  // reject bad axes now
   return p;
 }

@@ -100,6 +100,11 @@ std::string projectToJson(const Project& p) {
   }
   doc["measurements"] = measurements;
   doc["fit"] = ordered{{"free", p.fit.free}, {"starts", p.fit.starts}};
+  if (p.measuredSpectrum)
+    doc["measured_spectrum"] = ordered{{"name", p.measuredSpectrum->name},
+                                       {"unit", std::string(spectralUnitKey(p.measuredSpectrum->unit))},
+                                       {"position", p.measuredSpectrum->position},
+                                       {"signal", p.measuredSpectrum->signal}};
   if (const std::string bad = firstNonFinite(doc, ""); !bad.empty())
     throw InputError(bad, "not a finite number; the project was not written");
   return doc.dump(2) + "\n";

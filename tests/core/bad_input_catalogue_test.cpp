@@ -96,8 +96,9 @@ TEST(BadInputCatalogue, EveryFileIsRejectedWithItsMessage) {
     ASSERT_FALSE(message.empty()) << "accepted without an error";
     EXPECT_EQ(stage, entry.stage) << message;
     for (const auto& part : entry.expect) EXPECT_NE(message.find(part), std::string::npos) << "missing '" << part << "' in: " << message;
-    if (entry.stage == "read")
+    if (entry.stage == "read") {
       EXPECT_NE(message.find(entry.file), std::string::npos) << "the message must name the file: " << message;
+    }
     ++checked;
   }
   EXPECT_GE(checked, 30);

@@ -55,7 +55,7 @@ TEST(PlannerPhysics, FieldAlongClassAxisMaximisesItsCyclicity) {
   const FigureMap map = computeFigureMap(model, settings, grid);
   for (int cls = 0; cls < kClassCount; ++cls) {
     double best = -1;
-    Vec3 bestDir;
+    Vec3 bestDir = Vec3::Zero();
     for (int i = 0; i < grid.polarCount; ++i)
       for (int j = 0; j < grid.azimuthCount; ++j)
         if (map.at(i, j, cls).cyclicity > best) {
