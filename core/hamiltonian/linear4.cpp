@@ -91,10 +91,14 @@ struct ResolventRoots {
   double p, q, r;      ///< the depressed quartic x⁴ + p x² + q x + r of K = H − e0
 };
 
-ResolventRoots resolventRoots(const PauliForm4& f, const Vec3& b, double& e0) {
+// Pauli components e0, ox, oy, oz, bx, by, bz, c of H at field b.
+std::array<double, 8> componentsAt(const PauliForm4& f, const Vec3& b) {
   std::array<double, 8> v;
   for (std::size_t k = 0; k < 8; ++k) v[k] = f.value[k] + f.gradient[k].dot(b);
-  e0 = v[0];
+  return v;
+}
+
+ResolventRoots resolventRoots(const std::array<double, 8>& v) {
   const double ox = v[1], oy = v[2], oz = v[3], bx = v[4], by = v[5], bz = v[6], c = v[7];
   const double o2 = ox * ox + oy * oy + oz * oz, b2 = bx * bx + by * by + bz * bz;
   const double S = o2 + b2 + c * c;
@@ -161,28 +165,75 @@ bool projectorVectors(const Matrix4c& k, const Matrix4c& k2, const Matrix4c& k3,
   return true;
 }
 
+// K = H − e0 from its Pauli components (basis 2·orbital + spin): diagonal blocks A = oz + b·s and
+// D = −oz + b·s, off-diagonal block B = (ox − i oy)·1 − i c s_z = diag(u, w).
+Matrix4c pauliMatrix(const std::array<double, 8>& v) {
+  const double ox = v[1], oy = v[2], oz = v[3], bx = v[4], by = v[5], bz = v[6], c = v[7];
+  const cplx p(bx, -by), u(ox, -(oy + c)), w(ox, -(oy - c));
+  Matrix4c k;
+  k << oz + bz, p, u, 0.0,
+       std::conj(p), oz - bz, 0.0, w,
+       std::conj(u), 0.0, -oz + bz, p,
+       0.0, std::conj(w), std::conj(p), -oz - bz;
+  return k;
+}
+
+// Eigenvectors by eliminating the y-orbital half. With v = (α, β) and B = diag(u, w):
+//   (A − x)α + Bβ = 0  ⇒  uw·β = −adj(B)(A − x)α,   and   B†α + (D − x)β = 0  ⇒  N α = 0 with
+//   N = uw·B† − (D − x) adj(B) (A − x), a rank-one 2×2 matrix; α ⊥ its larger row. The vector
+//   (uw·α, −adj(B)(A − x)α) is then normalised. False when uw or N is too small to trust.
+bool blockVectors(const Matrix4c& k, const Vector4r& x, double scale, Matrix4c& vectors) {
+  const cplx u = k(0, 2), w = k(1, 3), p = k(0, 1), uw = u * w;
+  const double scale2 = scale * scale;
+  if (std::norm(uw) < 1e-6 * scale2 * scale2) return false;  // |uw| < 1e-3 scale²
+  const double u2 = std::norm(u), w2 = std::norm(w), p2 = std::norm(p);
+  for (int i = 0; i < 4; ++i) {
+    const double a00 = k(0, 0).real() - x[i], a11 = k(1, 1).real() - x[i];
+    const double d00 = k(2, 2).real() - x[i], d11 = k(3, 3).real() - x[i];
+    // N written out: N = [[w(|u|² − a00 d00) − |p|² u, −p(d00 w + u a11)],
+    //                     [−p*(w a00 + u d11), u(|w|² − a11 d11) − |p|² w]].
+    const cplx n00 = w * (u2 - a00 * d00) - p2 * u, n01 = -p * (d00 * w + u * a11);
+    const cplx n10 = -std::conj(p) * (w * a00 + u * d11), n11 = u * (w2 - a11 * d11) - p2 * w;
+    const double row0 = std::norm(n00) + std::norm(n01), row1 = std::norm(n10) + std::norm(n11);
+    const cplx alpha0 = row0 >= row1 ? n01 : n11, alpha1 = row0 >= row1 ? -n00 : -n10;
+    if (!(std::max(row0, row1) > 1e-18 * scale2 * scale2 * scale2)) return false;
+    const cplx beta0 = -w * (a00 * alpha0 + p * alpha1), beta1 = -u * (std::conj(p) * alpha0 + a11 * alpha1);
+    const cplx top0 = uw * alpha0, top1 = uw * alpha1;
+    const double inverse = 1.0 / std::sqrt(std::norm(top0) + std::norm(top1) + std::norm(beta0) + std::norm(beta1));
+    vectors(0, i) = top0 * inverse, vectors(1, i) = top1 * inverse;
+    vectors(2, i) = beta0 * inverse, vectors(3, i) = beta1 * inverse;
+  }
+  return true;
+}
+
+// Eigenvectors for the (distinct) eigenvalues x of K: block elimination, or the spectral
+// projectors where the off-diagonal block is nearly singular.
+bool eigenvectorsFor(const Matrix4c& k, const Vector4r& x, double scale, Matrix4c& vectors) {
+  if (blockVectors(k, x, scale, vectors)) return true;
+  const Matrix4c k2 = k * k;
+  const Matrix4c k3 = k2 * k;
+  return projectorVectors(k, k2, k3, x, vectors);
+}
+
 }  // namespace
 
 Vector4r quarticLevels(const PauliForm4& f, const Vec3& b) {
-  double e0 = 0;
-  const ResolventRoots y = resolventRoots(f, b, e0);
-  return shiftedRoots(y).array() + e0;
+  const std::array<double, 8> v = componentsAt(f, b);
+  return shiftedRoots(resolventRoots(v)).array() + v[0];
 }
 
 // With s1 = √y1 the largest, the roots are (s1 ± (s2+s3))/2 and (−s1 ± (s2−s3))/2, so the gap
 // between the upper and the lower pair is s1 − max(|s2|, |s3|) = √y1 − √y2.
 double quarticMiddleGap(const PauliForm4& f, const Vec3& b) {
-  double e0 = 0;
-  const ResolventRoots y = resolventRoots(f, b, e0);
+  const ResolventRoots y = resolventRoots(componentsAt(f, b));
   const double s1 = std::sqrt(y.y1), s2 = std::sqrt(y.y2);
   return s1 + s2 > 0 ? (y.y1 - y.y2) / (s1 + s2) : 0.0;
 }
 
 FINESTRA_VECTOR_CLONES
-bool closedFormEigen4(const PauliForm4& f, const LinearHamiltonian4& h, const Vec3& b, ManifoldEigen4& out,
-                      double relativeGap) {
-  double e0 = 0;
-  const ResolventRoots y = resolventRoots(f, b, e0);
+bool closedFormEigen4(const PauliForm4& f, const Vec3& b, ManifoldEigen4& out, double relativeGap) {
+  const std::array<double, 8> v = componentsAt(f, b);
+  const ResolventRoots y = resolventRoots(v);
   const double scale = std::sqrt(std::max(-y.p / 2.0, 0.0));  // tr(K²) = 4S = −2p: the rms level
   if (!(scale > 0.0)) return false;
   Vector4r x = shiftedRoots(y);
@@ -195,16 +246,12 @@ bool closedFormEigen4(const PauliForm4& f, const LinearHamiltonian4& h, const Ve
     const double slope = 4.0 * x2 * xi + 2.0 * y.p * xi + y.q;
     if (slope != 0.0) x[i] = xi - value / slope;
   }
-  Matrix4c k;
-  h.at(b, k);
-  k.diagonal().array() -= e0;
-  const Matrix4c k2 = k * k;
-  const Matrix4c k3 = k2 * k;
-  if (!projectorVectors(k, k2, k3, x, out.vectors)) return false;
+  const Matrix4c k = pauliMatrix(v);
+  if (!eigenvectorsFor(k, x, scale, out.vectors)) return false;
   // The polished roots carry the characteristic polynomial's rounding, ~ε X⁴/|f'(x_i)| (X the
-  // largest |x|), and a projector turns a root error δ into a vector error δ/gap. Where that may
+  // largest |x|), and the vectors inherit an error δ/gap from a root error δ. Where that may
   // exceed 1e-12, Rayleigh quotients (error quadratic in the vectors' error) replace the roots
-  // and the projectors are built again.
+  // and the vectors are built again.
   const double largest = std::max(std::abs(x[0]), std::abs(x[3]));
   const double largest2 = largest * largest;
   const double rounding = 4.0 * std::numeric_limits<double>::epsilon() * largest2 * largest2;
@@ -215,13 +262,11 @@ bool closedFormEigen4(const PauliForm4& f, const LinearHamiltonian4& h, const Ve
       if (m != i) slope *= x[i] - x[m], gap = std::min(gap, std::abs(x[i] - x[m]));
     refine = refine || rounding > 1e-12 * std::abs(slope) * gap;
   }
-  if (!refine) {
-    out.energies = x.array() + e0;
-    return true;
+  if (refine) {
+    for (int i = 0; i < 4; ++i) x[i] = out.vectors.col(i).dot(k * out.vectors.col(i)).real();
+    if (!eigenvectorsFor(k, x, scale, out.vectors)) return false;
   }
-  for (int i = 0; i < 4; ++i) x[i] = out.vectors.col(i).dot(k * out.vectors.col(i)).real();
-  if (!projectorVectors(k, k2, k3, x, out.vectors)) return false;
-  out.energies = x.array() + e0;
+  out.energies = x.array() + v[0];
   return true;
 }
 

@@ -42,12 +42,13 @@ Vector4r quarticLevels(const PauliForm4& form, const Vec3& fieldCrystal);
 /// E2 − E1 (the gap between the lower and the upper pair of levels) from the same quartic.
 double quarticMiddleGap(const PauliForm4& form, const Vec3& fieldCrystal);
 
-/// Eigen-decomposition of a PauliForm4 Hamiltonian without an iterative solver: the quartic's roots,
-/// polished by one Newton step on the characteristic polynomial, and each eigenvector as a column of
-/// the spectral projector P_i = Π_{k≠i} (K − x_k)/(x_i − x_k) (K = H − e0, built from K, K², K³).
+/// Eigen-decomposition of a PauliForm4 Hamiltonian (closedForm must be true) without an iterative
+/// solver: the quartic's roots polished by a Newton step; eigenvectors by eliminating one orbital
+/// half (a 2×2 null vector), or as spectral-projector columns where that elimination is
+/// ill-conditioned; Rayleigh refinement where the roots' rounding would show in the vectors.
 /// Returns false when two levels lie closer than `relativeGap` × the manifold's scale (degenerate
 /// or nearly so, e.g. Kramers pairs at zero field); the caller then uses the self-adjoint solver.
-bool closedFormEigen4(const PauliForm4& form, const LinearHamiltonian4& h, const Vec3& fieldCrystal,
-                      ManifoldEigen4& out, double relativeGap = 1e-7);
+bool closedFormEigen4(const PauliForm4& form, const Vec3& fieldCrystal, ManifoldEigen4& out,
+                      double relativeGap = 1e-7);
 
 }  // namespace finestra

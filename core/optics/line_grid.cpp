@@ -26,7 +26,7 @@ LineGridKernel::LineGridKernel(const CentreModel& model) {
 }
 
 void LineGridKernel::diagonalise(const Manifold4& m, const Vec3& field, ManifoldEigen4& out) const {
-  if (m.form.closedForm && closedFormEigen4(m.form, m.linear, field, out)) return;
+  if (m.form.closedForm && closedFormEigen4(m.form, field, out)) return;
   Matrix4c h;
   m.linear.at(field, h);
   const Eigen::SelfAdjointEigenSolver<Matrix4c> solver(h);
