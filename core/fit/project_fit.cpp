@@ -1,6 +1,7 @@
 #include "core/fit/project_fit.h"
 
 #include <algorithm>
+#include <atomic>
 #include <cmath>
 #include <cstdio>
 #include <limits>
@@ -70,6 +71,7 @@ StartOutcome runStart(const std::shared_ptr<const FitProblem>& problem, FitState
   std::optional<std::vector<std::optional<LineRef>>> previous;
   int roundsAtTau = 0;
   for (int round = 0; round < o.maxRounds; ++round) {
+    o.progress.throwIfCancelled();
     const PeakAssignments assigned = assignPeaks(*problem, state, tau, o.assignment);
     const bool same = previous && *previous == assigned.lines;
     if (same && tau == 0) {
@@ -137,10 +139,14 @@ FitResult fitProject(const Project& project, const FitOptions& o) {
   if (starts < 1) throw InputError("starts", "at least one start is needed");
 
   std::vector<StartOutcome> outcomes(static_cast<std::size_t>(starts));
+  std::atomic<int> finished{0};
   parallelChunks(starts, [&](long begin, long end) {
-    for (long k = begin; k < end; ++k)
+    for (long k = begin; k < end; ++k) {
       outcomes[static_cast<std::size_t>(k)] = runStart(problem, startState(*problem, static_cast<int>(k), o.seed), o);
+      o.progress.progress(static_cast<double>(++finished) / starts);
+    }
   }, o.threads);
+  o.progress.throwIfCancelled();
   std::size_t best = 0;
   for (std::size_t k = 1; k < outcomes.size(); ++k)
     if (outcomes[k].cost < outcomes[best].cost - 1e-9) best = k;

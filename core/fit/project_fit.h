@@ -7,6 +7,7 @@
 #include <string>
 #include <vector>
 
+#include "core/common/progress.h"
 #include "core/fit/least_squares.h"
 #include "core/fit/peak_assignment.h"
 
@@ -22,6 +23,9 @@ struct FitOptions {
   int threads = 0;            ///< 0: all cores
   AssignmentOptions assignment;
   LeastSquaresOptions solver;
+  /// Polled between assignment/fit rounds: a set cancel flag makes fitProject throw Cancelled.
+  /// `report` receives the fraction of starts finished (from the computing threads).
+  ProgressControl progress;
 };
 
 struct FittedParameter {
@@ -59,8 +63,8 @@ struct FitResult {
   FitState state;             ///< the fitted state
 };
 
-/// Throws InputError (naming the key) for bad input; never for a fit that fails to converge,
-/// which is reported in the result.
+/// Throws InputError (naming the key) for bad input, Cancelled when options.progress asks to stop;
+/// never for a fit that fails to converge, which is reported in the result.
 FitResult fitProject(const Project& project, const FitOptions& options = {});
 
 /// Writes the fitted centre parameters, strain and E-strain into a copy of the project (ZPL offset
