@@ -55,6 +55,7 @@ void ProjectDocument::endDrag() { dragToken_ = 0; }
 
 void ProjectDocument::applyState(const Project& project, Changes what) {
   project_ = project;
+  if (what & Change::Measurements) fitLabels_.clear();
   ++revision_;
   Q_EMIT changed(what);
 }
@@ -66,6 +67,7 @@ void ProjectDocument::reset(Project project, const QString& filePath, bool modif
   filePath_ = filePath;
   modifiedOutsideUndo_ = modified;
   measuredSpectrum_.reset();
+  fitLabels_.clear();
   ++revision_;
   Q_EMIT changed(Change::Everything);
 }
@@ -88,6 +90,11 @@ void ProjectDocument::setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectr
   measuredSpectrum_ = std::move(spectrum);
   ++revision_;
   Q_EMIT changed(Change::MeasuredSpectrum);
+}
+
+void ProjectDocument::setFitLabels(QVector<PeakLabel> labels) {
+  fitLabels_ = std::move(labels);
+  Q_EMIT changed(Change::Fit);
 }
 
 }  // namespace finestra::ui

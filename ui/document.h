@@ -6,6 +6,7 @@
 #include <QObject>
 #include <QString>
 #include <QUndoStack>
+#include <QVector>
 #include <functional>
 #include <optional>
 
@@ -25,7 +26,8 @@ enum class Change : unsigned {
   Measurements = 1u << 7,
   MeasuredSpectrum = 1u << 8,
   File = 1u << 9,  ///< path or modified state
-  Everything = 0x3FFu,
+  Fit = 1u << 10,  ///< fit settings (fit.free, fit.starts) or the session's fit labels
+  Everything = 0x7FFu,
 };
 Q_DECLARE_FLAGS(Changes, Change)
 Q_DECLARE_OPERATORS_FOR_FLAGS(Changes)
@@ -33,6 +35,12 @@ Q_DECLARE_OPERATORS_FOR_FLAGS(Changes)
 /// Changes that alter computed results (everything except file state and measured overlays).
 inline constexpr Changes kPhysicsChanges = Changes(Change::Centre) | Change::Sample | Change::Field | Change::Strain |
                                            Change::Conditions | Change::Classes | Change::Sweeps;
+
+/// The line a measured peak was matched to by the last fit or assignment of this session.
+struct PeakLabel {
+  int measurement = 0, peak = 0;  ///< indices into project.measurements and its peaks
+  QString text;                   ///< e.g. "C1·cl0"
+};
 
 class ProjectDocument : public QObject {
   Q_OBJECT
@@ -66,6 +74,12 @@ public:
   const std::optional<MeasuredSpectrum>& measuredSpectrum() const { return measuredSpectrum_; }
   void setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectrum);
 
+  /// Labels from the last fit or assignment run in this session: neither saved nor undoable, and
+  /// dropped by any change of the measurements (their indices would no longer match).
+  const QVector<PeakLabel>& fitLabels() const { return fitLabels_; }
+  /// Emits changed(Change::Fit).
+  void setFitLabels(QVector<PeakLabel> labels);
+
   /// Used by the undo commands only.
   void applyState(const Project& project, Changes what);
 
@@ -81,6 +95,7 @@ private:
   quint64 dragToken_ = 0;
   quint64 nextDragToken_ = 1;
   std::optional<MeasuredSpectrum> measuredSpectrum_;
+  QVector<PeakLabel> fitLabels_;
 };
 
 }  // namespace finestra::ui

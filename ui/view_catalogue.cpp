@@ -1,3 +1,4 @@
+#include "ui/fit/fit_view.h"
 #include "ui/planner/planner_view.h"
 #include "ui/result_view.h"
 #include "ui/views/levels_view.h"
@@ -14,6 +15,7 @@ const std::vector<ViewEntry>& viewCatalogue() {
       {"spectrum", "Spectrum", makeView<SpectrumView>},
       {"table", "Line table", makeView<LineTableView>},
       {"planner", "Magnet planner", makeView<PlannerView>},
+      {"fit", "Assignment and fit", makeView<FitView>},
   };
   return views;
 }

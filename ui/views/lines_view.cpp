@@ -6,6 +6,7 @@
 
 #include "core/optics/line_info.h"
 #include "core/report/reports.h"
+#include "ui/fit/peak_labels.h"
 
 namespace finestra::ui {
 namespace {
@@ -29,10 +30,15 @@ LinesView::LinesView(const ViewContext& context, QWidget* parent)
   connect(plot_, &QCustomPlot::mousePress, this, &LinesView::onMousePress);
   connect(filter_, &ClassFilterBar::filterChanged, this, &LinesView::rebuild);
   filter_->applyPalette(palette(), true);
+  if (context.document)
+    connect(context.document, &ProjectDocument::changed, this, [this](Changes what) {
+      if (what & Change::Fit) rebuild();
+    });
 }
 
 void LinesView::showResult(const ResultPtr& result) {
   result_ = result;
+  pinnedLabels_ = result_ && result_->error.isEmpty() ? pinnedLabels(result_->project) : QVector<PeakLabel>{};
   rebuild();
 }
 
@@ -106,6 +112,7 @@ void LinesView::rebuild() {
     bars->removeFromLegend();
   }
   plot_->rescaleAxes();
+  addPeakLabels();
   const QCPRange y = plot_->yAxis->range();
   plot_->yAxis->setRange(y.lower - 0.05 * y.size(), y.upper + 0.05 * y.size());
   if (result_->currentX) {
@@ -115,6 +122,29 @@ void LinesView::rebuild() {
     marker->setPen(QPen(palette().marker, 1.2, Qt::DashLine));
   }
   plot_->replot();
+}
+
+void LinesView::addPeakLabels() {
+  // Fit labels (of the session) win over pinned ones: they include the pinned peaks anyway.
+  QMap<QPair<int, int>, QString> labels;
+  for (const PeakLabel& l : pinnedLabels_) labels[{l.measurement, l.peak}] = l.text;
+  if (context().document)
+    for (const PeakLabel& l : context().document->fitLabels()) labels[{l.measurement, l.peak}] = l.text;
+  if (labels.isEmpty()) return;
+  for (const PeakMark& p : result_->peaks) {
+    const auto it = labels.constFind({p.measurement, p.peak});
+    if (it == labels.constEnd()) continue;
+    auto* text = new QCPItemText(plot_);
+    text->position->setCoords(p.x, p.y);
+    text->setPositionAlignment(Qt::AlignLeft | Qt::AlignVCenter);
+    text->setPadding(QMargins(6, 0, 0, 0));
+    text->setText(*it);
+    text->setColor(palette().measured.darker(130));
+    QFont font = plot_->font();
+    font.setPointSize(8);
+    text->setFont(font);
+    text->setClipToAxisRect(true);
+  }
 }
 
 qsizetype LinesView::peakAt(const QPointF& pixel, double radius) const {

@@ -2,7 +2,9 @@
 // Line map: every line of every shown class against the sweep variable on the chosen spectral
 // axis. Colour = class, filled disc = dipole mostly along the defect axis, open circle = mostly
 // perpendicular, marker size and opacity = intensity bin. Measured peaks sit on top with their
-// uncertainty; clicking one asks for the nearest predicted lines.
+// uncertainty; clicking one asks for the nearest predicted lines. A peak matched to a line (pinned
+// in the project, or by the last fit or assignment of the session) carries its label, e.g. "C1·cl0".
+#include "ui/document.h"
 #include "ui/result_view.h"
 #include "ui/views/plot_helpers.h"
 
@@ -19,6 +21,7 @@ public:
 
 private:
   void rebuild();
+  void addPeakLabels();
   void onMouseMove(QMouseEvent* event);
   void onMousePress(QMouseEvent* event);
   /// Nearest measured peak to a pixel position within `radius` pixels, as an index into peaks.
@@ -27,6 +30,7 @@ private:
   QCustomPlot* plot_ = nullptr;
   ClassFilterBar* filter_ = nullptr;
   ResultPtr result_;
+  QVector<PeakLabel> pinnedLabels_;  ///< of result_->project
 };
 
 }  // namespace finestra::ui
