@@ -27,6 +27,7 @@ for view in levels lines spectrum table; do
   shot "$view" "window-$view"
   shot "$view" "window-$view-measured" --import-peaks "$peaks" --import-spectrum "$spectrum"
 done
+project="$root/examples/fit-demo.json" shot fit window-fit
 "$app" --project "$project" --export-view lines --out "$out/figure-lines.png" --import-peaks "$peaks"
 "$app" --project "$project" --export-view levels --out "$out/figure-levels.png"
 "$app" --project "$project" --export-view spectrum --out "$out/figure-spectrum.png" --import-spectrum "$spectrum"
