@@ -49,7 +49,11 @@ struct OpticalLine {
   CVec3 amplitudeCrystal = CVec3::Zero();
   char parent = '?';                ///< A, B, C or D
   int subIndex = 0;                 ///< 1-based, by increasing frequency within the parent
-  std::string label() const { return std::string(1, parent) + std::to_string(subIndex); }
+  std::string label() const {
+    std::string text(1, parent);  // appended, not concatenated: GCC 12 warns falsely on operator+ here
+    text += std::to_string(subIndex);
+    return text;
+  }
 };
 
 struct ClassSolution {

@@ -3,7 +3,6 @@
 // worker; the driver's own cancellation and progress; fit labels reach the Lines view; headless
 // export of the view.
 #include <QFile>
-#include <mutex>
 #include <QSignalSpy>
 #include <QTemporaryDir>
 #include <QTest>
@@ -166,26 +165,6 @@ TEST(FitView, CancelStopsTheWorker) {
   QTRY_VERIFY(!view.runner().busy());
   EXPECT_EQ(finished.count(), 0);
   EXPECT_FALSE(view.lastOutcome());  // nothing replaced the (absent) previous result
-}
-
-TEST(FitDriver, CancelFlagStopsTheFitAndProgressCountsStarts) {
-  const Project project = readProjectFile(kFitDemo.toStdString());
-  std::atomic<bool> stop{true};
-  FitOptions cancelled;
-  cancelled.progress.cancel = &stop;
-  EXPECT_THROW(fitProject(project, cancelled), Cancelled);
-
-  FitOptions watched;
-  watched.starts = 4;
-  std::mutex mutex;
-  std::vector<double> fractions;
-  watched.progress.report = [&](double f) {
-    const std::lock_guard lock(mutex);
-    fractions.push_back(f);
-  };
-  fitProject(project, watched);
-  std::sort(fractions.begin(), fractions.end());
-  EXPECT_EQ(fractions, (std::vector<double>{0.25, 0.5, 0.75, 1.0}));
 }
 
 TEST(FitView, LabelsOfTheFitAppearOnTheLinesView) {
