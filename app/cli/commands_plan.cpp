@@ -94,7 +94,7 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
   const PlannerSettings& settings = request.settings;
 
   if (o.what == "point") {
-    const Vec3 field = project.field.crystalVector(model->setup().lab);
+    const Vec3 field = projectFieldCrystal(project, model->setup().lab);
     if (field.norm() == 0) throw InputError(common.project + ": field", "the project's field is zero; no direction to evaluate");
     std::array<ClassFigures, kClassCount> figures{};
     PlannerKernel(*model, settings).evaluate(field.normalized(), field.norm(), figures);

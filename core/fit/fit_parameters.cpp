@@ -92,6 +92,9 @@ FitState initialFitState(const Project& project) {
   FitState s;
   s.centre = resolveCentre(project.centre.preset, project.centre.isotope, project.centre.overrides);
   s.strain = project.strain;
+  s.fieldScale = project.magnet.fieldScale;
+  s.tiltDeg = project.magnet.tiltDeg;
+  s.tiltAzimuthDeg = project.magnet.tiltAzimuthDeg;
   return s;
 }
 
@@ -166,10 +169,7 @@ ModelSetup fitStateSetup(const FitState& s, const ModelSetup& base) {
 }
 
 Vec3 trueFieldLab(const FitState& s, const Vec3& nominalLab) {
-  const double phi = s.tiltAzimuthDeg * std::numbers::pi / 180.0;
-  const Vec3 axis(-std::sin(phi), std::cos(phi), 0.0);
-  const Mat3 rotation = rotationAbout(axis, s.tiltDeg * std::numbers::pi / 180.0);
-  return s.fieldScale * (rotation * nominalLab);
+  return MagnetCalibration{s.fieldScale, s.tiltDeg, s.tiltAzimuthDeg}.trueFieldLab(nominalLab);
 }
 
 }  // namespace finestra

@@ -49,7 +49,8 @@ std::optional<FitParameterSpec> findFitParameter(const std::string& name);
 /// Spec for each name; InputError naming `where` (e.g. "fit.free[2]") for an unknown or repeated name.
 std::vector<FitParameterSpec> fitParameterSpecs(const std::vector<std::string>& names, const std::string& where);
 
-/// The state of a project before any fit: resolved centre, project strain, nominal magnet.
+/// The state of a project before any fit: resolved centre, project strain, the project's magnet
+/// calibration.
 FitState initialFitState(const Project& project);
 
 double fitValue(const FitState& state, const FitParameterSpec& spec);

@@ -238,6 +238,7 @@ Project applyFitToProject(const Project& project, const FitResult& result) {
     if (spec->kind == FitParamKind::Centre) out.centre.overrides[p.name] = p.value;
   }
   out.strain = result.state.strain;
+  out.magnet = {result.state.fieldScale, result.state.tiltDeg, result.state.tiltAzimuthDeg};
   if (result.state.zplOffsetGHz != 0) {
     const double zpl = result.state.centre.parameters.get(Param::ZplTHz) + result.state.zplOffsetGHz * 1e-3;
     out.centre.overrides["zpl_THz"] = zpl;

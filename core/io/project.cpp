@@ -32,29 +32,42 @@ Mat3 strainFromComponents(double xx, double yy, double zz, double yz, double zx,
   return e;
 }
 
+Vec3 projectFieldCrystal(const Project& p, const LabFrame& lab) {
+  return lab.toCrystal(p.magnet.trueFieldLab(p.field.labVector(lab)));
+}
+
 ModelSetup makeModelSetup(const Project& p) {
   ModelSetup s{resolveCentre(p.centre.preset, p.centre.isotope, p.centre.overrides),
                LabFrame(p.sample.normal, p.sample.inPlaneX, "sample"), p.strain, p.conditions};
   return s;
 }
 
-Vec3 sweepField(const Project& p, const SweepSpec& s, const LabFrame& lab, double x) {
+namespace {
+
+// The nominal (magnet-setting) lab field at sweep coordinate x.
+Vec3 nominalSweepFieldLab(const Project& p, const SweepSpec& s, const LabFrame& lab, double x) {
   const Vec3 nominal = p.field.labVector(lab);
   switch (s.kind) {
     case SweepKind::Magnitude: {
       const Vec3 dir = nominal.norm() > 0 ? Vec3(nominal.normalized()) : Vec3(0, 0, 1);
-      return lab.toCrystal(x * dir);
+      return x * dir;
     }
     case SweepKind::Angle: {
       const Vec3 n = s.planeNormalLab.normalized();
       const Vec3 u = (s.startLab - s.startLab.dot(n) * n).normalized();
       const Vec3 v = n.cross(u);
       const double a = x * std::numbers::pi / 180.0;
-      return lab.toCrystal(nominal.norm() * (std::cos(a) * u + std::sin(a) * v));
+      return nominal.norm() * (std::cos(a) * u + std::sin(a) * v);
     }
-    case SweepKind::Strain: return lab.toCrystal(nominal);
+    case SweepKind::Strain: return nominal;
   }
   return Vec3::Zero();
+}
+
+}  // namespace
+
+Vec3 sweepField(const Project& p, const SweepSpec& s, const LabFrame& lab, double x) {
+  return lab.toCrystal(p.magnet.trueFieldLab(nominalSweepFieldLab(p, s, lab, x)));
 }
 
 Mat3 sweepStrain(const Project& p, const SweepSpec& s, double x) {

@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "core/model/centre_model.h"
+#include "core/crystal/magnet_calibration.h"
 #include "core/io/spectrum_csv.h"
 #include "core/units/spectral_units.h"
 
@@ -80,7 +81,8 @@ struct FitSettings {
 struct Project {
   CentreChoice centre;
   SampleSetting sample;
-  FieldSetting field;
+  FieldSetting field;  ///< as set on the magnet (nominal)
+  MagnetCalibration magnet;  ///< applied to every magnet setting: the project field, sweeps, measurements
   StrainSetting strain;
   DetectionConditions conditions;
   std::vector<int> classes{0, 1, 2, 3};
@@ -107,10 +109,14 @@ void writeFileAtomically(const std::string& path, const std::string& text);
 /// Reads a whole file; InputError naming the path if it cannot be read.
 std::string readTextFile(const std::string& path);
 
+/// The true field (crystal frame, T) of the project's magnet setting: the calibration applied.
+Vec3 projectFieldCrystal(const Project& project, const LabFrame& lab);
+
 /// Resolves the centre and frames; throws InputError/MissingValueError naming the key at fault.
 ModelSetup makeModelSetup(const Project& project);
 
-/// Field (crystal frame, T) at parameter value `x` of a sweep, and the strain there.
+/// True field (crystal frame, T; the magnet calibration applied to the nominal sweep path) at
+/// parameter value `x` of a sweep, and the strain there.
 Vec3 sweepField(const Project& project, const SweepSpec& sweep, const LabFrame& lab, double x);
 Mat3 sweepStrain(const Project& project, const SweepSpec& sweep, double x);
 

@@ -216,6 +216,18 @@ std::vector<double> readNumbers(const json& arr, const std::string& path) {
   return out;
 }
 
+MagnetCalibration readMagnet(const JsonObjectReader& r) {
+  r.allowOnly({"field_scale", "tilt_deg", "tilt_azimuth_deg"});
+  MagnetCalibration m;
+  m.fieldScale = r.number("field_scale", m.fieldScale);
+  if (!(m.fieldScale > 0.1 && m.fieldScale < 10))
+    throw InputError(r.keyPath("field_scale"), "must lie between 0.1 and 10 (true / nominal field magnitude)");
+  m.tiltDeg = r.number("tilt_deg", m.tiltDeg);
+  if (std::abs(m.tiltDeg) > 90) throw InputError(r.keyPath("tilt_deg"), "must lie between -90 and 90 degrees");
+  m.tiltAzimuthDeg = r.number("tilt_azimuth_deg", m.tiltAzimuthDeg);
+  return m;
+}
+
 MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
   r.allowOnly({"name", "unit", "position", "signal"});
   MeasuredSpectrum m;
@@ -254,12 +266,13 @@ Project readDocument(const json& doc) {
                                     "); open it with a newer Finestra");
   if (version < 1) throw InputError("version", "must be 1");
   top.allowOnly({"format", "version", "description", "centre", "sample", "field", "strain", "conditions",
-                 "classes", "sweeps", "measurements", "fit", "measured_spectrum"});
+                 "classes", "sweeps", "measurements", "fit", "measured_spectrum", "magnet"});
   Project p;
   p.description = top.string("description", "");
   p.centre = readCentre(top.object("centre"));
   if (top.has("sample")) p.sample = readSample(top.object("sample"));
   if (top.has("field")) p.field = readField(top.object("field"));
+  if (!top.isNull("magnet")) p.magnet = readMagnet(top.object("magnet"));
   if (top.has("strain")) p.strain = readStrain(top.object("strain"));
   if (top.has("conditions")) p.conditions = readConditions(top.object("conditions"));
   if (top.has("classes")) p.classes = readClasses(top.raw("classes"), "classes");

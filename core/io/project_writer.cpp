@@ -76,6 +76,10 @@ std::string projectToJson(const Project& p) {
                           {"parameters", params}};
   doc["sample"] = ordered{{"normal", vec(p.sample.normal)}, {"in_plane_x", vec(p.sample.inPlaneX)}};
   doc["field"] = field(p.field);
+  if (!p.magnet.isNominal())
+    doc["magnet"] = ordered{{"field_scale", p.magnet.fieldScale},
+                            {"tilt_deg", p.magnet.tiltDeg},
+                            {"tilt_azimuth_deg", p.magnet.tiltAzimuthDeg}};
   ordered strain{{"crystal", tensor(p.strain.crystal)}};
   auto eg = [](const EgStrain& e) { return ordered{{"magnitude_GHz", e.magnitudeGHz}, {"angle_deg", e.angleDeg}}; };
   if (p.strain.extraGround.magnitudeGHz != 0) strain["eg_ground"] = eg(p.strain.extraGround);

@@ -1,0 +1,16 @@
+#include "core/crystal/magnet_calibration.h"
+
+#include <cmath>
+#include <numbers>
+
+#include "core/crystal/frames.h"
+
+namespace finestra {
+
+Vec3 MagnetCalibration::trueFieldLab(const Vec3& nominalLab) const {
+  const double phi = tiltAzimuthDeg * std::numbers::pi / 180.0;
+  const Vec3 axis(-std::sin(phi), std::cos(phi), 0.0);
+  return fieldScale * (rotationAbout(axis, tiltDeg * std::numbers::pi / 180.0) * nominalLab);
+}
+
+}  // namespace finestra
