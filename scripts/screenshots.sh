@@ -27,7 +27,12 @@ for view in levels lines spectrum table; do
   shot "$view" "window-$view"
   shot "$view" "window-$view-measured" --import-peaks "$peaks" --import-spectrum "$spectrum"
 done
-project="$root/examples/fit-demo.json" shot fit window-fit
+project="$root/examples/fit-demo.json" shot fit window-fit-before
+# The same view after a fit: the project with the fitted values applied (finestra-cli fit --write-project).
+fitted="$recovery/fit-demo-fitted.json"
+"$(dirname "$app")/../cli/finestra-cli" fit "$root/examples/fit-demo.json" --write-project "$fitted" >/dev/null
+project="$fitted" shot fit window-fit
+shot planner window-planner --screenshot-delay 4000
 "$app" --project "$project" --export-view lines --out "$out/figure-lines.png" --import-peaks "$peaks"
 "$app" --project "$project" --export-view levels --out "$out/figure-levels.png"
 "$app" --project "$project" --export-view spectrum --out "$out/figure-spectrum.png" --import-spectrum "$spectrum"

@@ -66,7 +66,6 @@ void ProjectDocument::reset(Project project, const QString& filePath, bool modif
   project_ = std::move(project);
   filePath_ = filePath;
   modifiedOutsideUndo_ = modified;
-  measuredSpectrum_.reset();
   fitLabels_.clear();
   ++revision_;
   Q_EMIT changed(Change::Everything);
@@ -87,9 +86,8 @@ void ProjectDocument::saveAs(const QString& path) {
 }
 
 void ProjectDocument::setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectrum) {
-  measuredSpectrum_ = std::move(spectrum);
-  ++revision_;
-  Q_EMIT changed(Change::MeasuredSpectrum);
+  const QString text = spectrum ? tr("Import measured spectrum") : tr("Remove measured spectrum");
+  edit(text, Change::MeasuredSpectrum, [&](Project& p) { p.measuredSpectrum = std::move(spectrum); });
 }
 
 void ProjectDocument::setFitLabels(QVector<PeakLabel> labels) {

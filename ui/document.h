@@ -71,7 +71,9 @@ public:
   /// Atomic write; throws InputError naming the path; on success the document becomes clean.
   void saveAs(const QString& path);
 
-  const std::optional<MeasuredSpectrum>& measuredSpectrum() const { return measuredSpectrum_; }
+  /// The measured spectrum is part of the project (saved with it); setting or removing it is one
+  /// undo step.
+  const std::optional<MeasuredSpectrum>& measuredSpectrum() const { return project_.measuredSpectrum; }
   void setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectrum);
 
   /// Labels from the last fit or assignment run in this session: neither saved nor undoable, and
@@ -94,7 +96,6 @@ private:
   quint64 revision_ = 0;
   quint64 dragToken_ = 0;
   quint64 nextDragToken_ = 1;
-  std::optional<MeasuredSpectrum> measuredSpectrum_;
   QVector<PeakLabel> fitLabels_;
 };
 

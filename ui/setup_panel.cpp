@@ -453,9 +453,17 @@ void SetupPanel::refreshField() {
   try {
     const LabFrame lab(p.sample.normal, p.sample.inPlaneX);
     const Vec3 l = f.labVector(lab), c = f.crystalVector(lab);
-    fieldSummary_->setText(tr("lab (%1, %2, %3) T    crystal (%4, %5, %6) T")
-                               .arg(l[0], 0, 'f', 4).arg(l[1], 0, 'f', 4).arg(l[2], 0, 'f', 4)
-                               .arg(c[0], 0, 'f', 4).arg(c[1], 0, 'f', 4).arg(c[2], 0, 'f', 4));
+    QString summary = tr("lab (%1, %2, %3) T    crystal (%4, %5, %6) T")
+                          .arg(l[0], 0, 'f', 4).arg(l[1], 0, 'f', 4).arg(l[2], 0, 'f', 4)
+                          .arg(c[0], 0, 'f', 4).arg(c[1], 0, 'f', 4).arg(c[2], 0, 'f', 4);
+    if (!p.magnet.isNominal()) {  // a fitted calibration is in the project: show what the centres see
+      const Vec3 t = projectFieldCrystal(p, lab);
+      summary += tr("\ncalibrated (scale %1, tilt %2° toward %3°): crystal (%4, %5, %6) T")
+                     .arg(p.magnet.fieldScale, 0, 'f', 5).arg(p.magnet.tiltDeg, 0, 'f', 3)
+                     .arg(p.magnet.tiltAzimuthDeg, 0, 'f', 1)
+                     .arg(t[0], 0, 'f', 4).arg(t[1], 0, 'f', 4).arg(t[2], 0, 'f', 4);
+    }
+    fieldSummary_->setText(summary);
   } catch (const InputError& e) {
     fieldSummary_->setText(QString::fromStdString(e.what()));
   }

@@ -3,6 +3,7 @@
 #include <QApplication>
 #include <QCommandLineParser>
 #include <QTimer>
+#include <algorithm>
 #include <cstdio>
 #include <spdlog/spdlog.h>
 
@@ -49,9 +50,10 @@ int main(int argc, char** argv) {
   const QCommandLineOption peaksOption("import-peaks", "Measured peaks CSV to add.", "file");
   const QCommandLineOption spectrumOption("import-spectrum", "Measured spectrum CSV to overlay.", "file");
   const QCommandLineOption shotOption("screenshot", "Open the window, show this view, save a screenshot to --out, quit.", "view");
+  const QCommandLineOption delayOption("screenshot-delay", "Milliseconds between the first result and the --screenshot grab.", "ms", "400");
   const QCommandLineOption recoveryOption("recovery-folder", "Folder for autosaved copies (testing).", "folder");
   parser.addOptions({projectOption, viewOption, outOption, unitOpt, sweepOption, sizeOption, peaksOption, spectrumOption,
-                     shotOption, recoveryOption});
+                     shotOption, delayOption, recoveryOption});
   parser.process(app);
 
   QString project = parser.value(projectOption);
@@ -87,8 +89,9 @@ int main(int argc, char** argv) {
       std::fprintf(stderr, "finestra: --screenshot: unknown view '%s'\n", qPrintable(view));
       return 2;
     }
-    QObject::connect(&window, &finestra::ui::MainWindow::resultShown, &window, [&window, out] {
-      QTimer::singleShot(400, &window, [&window, out] {
+    const int delayMs = std::max(0, parser.value(delayOption).toInt());
+    QObject::connect(&window, &finestra::ui::MainWindow::resultShown, &window, [&window, out, delayMs] {
+      QTimer::singleShot(delayMs, &window, [&window, out] {
         if (!window.grab().save(out)) std::fprintf(stderr, "finestra: cannot write %s\n", qPrintable(out));
         window.document().undoStack().setClean();
         window.close();

@@ -14,6 +14,8 @@ struct MagnetCalibration {
 
   bool isNominal() const { return fieldScale == 1 && tiltDeg == 0; }
   Vec3 trueFieldLab(const Vec3& nominalLab) const;
+  /// The magnet setting that produces `trueLab` (the inverse of trueFieldLab).
+  Vec3 nominalFieldLab(const Vec3& trueLab) const;
 };
 
 }  // namespace finestra

@@ -35,6 +35,8 @@ TEST(MagnetCalibration, TipsLabZTowardTheTiltAzimuthAndScales) {
                                    std::cos(7 * kDeg));
   EXPECT_LT((z - expected).norm(), 1e-14);
   EXPECT_NEAR(m.trueFieldLab(Vec3(0.3, -0.2, 0.5)).norm(), 1.2 * Vec3(0.3, -0.2, 0.5).norm(), 1e-14);
+  const Vec3 b(0.3, -0.2, 0.5);
+  EXPECT_LT((m.nominalFieldLab(m.trueFieldLab(b)) - b).norm(), 1e-15);
   EXPECT_TRUE(MagnetCalibration{}.isNominal());
   EXPECT_EQ(MagnetCalibration{}.trueFieldLab(Vec3(0.1, 0.2, 0.3)), Vec3(0.1, 0.2, 0.3));
 }

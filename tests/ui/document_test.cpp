@@ -5,6 +5,7 @@
 #include <gtest/gtest.h>
 
 #include "core/common/errors.h"
+#include "core/io/spectrum_csv.h"
 #include "ui/autosave.h"
 #include "ui/document.h"
 
@@ -74,6 +75,29 @@ TEST(Document, SaveLoadRoundTrip) {
   reopened.open(path);
   EXPECT_EQ(projectToJson(reopened.project()), projectToJson(doc.project()));
   EXPECT_EQ(reopened.filePath(), path);
+}
+
+// An imported measured spectrum belongs to the project: saved, reopened, and removed by undo.
+TEST(Document, MeasuredSpectrumIsSavedAndUndoable) {
+  ProjectDocument doc;
+  doc.open(kExample);
+  doc.setMeasuredSpectrum(readSpectrumCsv(FINESTRA_SOURCE_DIR "/examples/membrane-invented-spectrum.csv"));
+  ASSERT_TRUE(doc.measuredSpectrum().has_value());
+  const std::size_t points = doc.measuredSpectrum()->position.size();
+  EXPECT_GT(points, 10u);
+  EXPECT_EQ(doc.undoStack().count(), 1);
+  QTemporaryDir dir;
+  const QString path = dir.filePath("with-spectrum.json");
+  doc.saveAs(path);
+  ProjectDocument reopened;
+  reopened.open(path);
+  ASSERT_TRUE(reopened.measuredSpectrum().has_value());
+  EXPECT_EQ(reopened.measuredSpectrum()->position, doc.measuredSpectrum()->position);
+  EXPECT_EQ(reopened.measuredSpectrum()->signal, doc.measuredSpectrum()->signal);
+  doc.undoStack().undo();
+  EXPECT_FALSE(doc.measuredSpectrum().has_value());
+  doc.undoStack().redo();
+  EXPECT_EQ(doc.measuredSpectrum()->position.size(), points);
 }
 
 TEST(Document, OpenErrorKeepsCurrentDocument) {

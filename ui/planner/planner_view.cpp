@@ -150,10 +150,21 @@ void PlannerView::showResult(const ResultPtr& result) {
   const bool first = !result_;
   result_ = result;
   if (first && result_ && result_->model) {
-    const double b = result_->project.field.labVector(result_->model->setup().lab).norm();
+    const double b = trueFieldLab().norm();
     if (b > 0) magnitudeBox_->setValue(b);
   }
   redraw();
+  if (first && isVisible()) startMap();
+}
+
+void PlannerView::showEvent(QShowEvent* event) {
+  ResultView::showEvent(event);
+  if (!maps_ && !worker_ && result_ && result_->model) startMap();  // a first map without a click
+}
+
+Vec3 PlannerView::trueFieldLab() const {
+  const Project& p = result_->project;
+  return p.magnet.trueFieldLab(p.field.labVector(result_->model->setup().lab));
 }
 
 void PlannerView::startMap() {
@@ -172,7 +183,7 @@ void PlannerView::startMap() {
   SphereGrid grid;
   grid.polarCount = static_cast<int>(std::lround(180.0 / stepBox_->value())) + 1;
   grid.azimuthCount = static_cast<int>(std::lround(360.0 / stepBox_->value())) + 1;
-  Vec3 profileDirection = result_->project.field.labVector(result_->model->setup().lab);
+  Vec3 profileDirection = trueFieldLab();
   if (profileDirection.norm() == 0) profileDirection = Vec3::UnitZ();
   const double profileMax = std::max(2.0 * settings.magnitudeT, 1.0);
 
@@ -249,7 +260,7 @@ void PlannerView::redraw() {
   current_->data()->clear();
   profilePlot_->clearGraphs();
   if (result_ && result_->model) {
-    const Vec3 b = result_->project.field.labVector(result_->model->setup().lab);
+    const Vec3 b = trueFieldLab();
     if (b.norm() > 0) {
       const auto angles = anglesOfDirection(b);
       current_->addData(angles[1], equalArea() ? std::cos(angles[0] * kDeg) : angles[0]);
@@ -326,9 +337,12 @@ void PlannerView::onMapClick(QMouseEvent* event) {
   } else if (y < 0 || y > 180) {
     return;
   }
-  const double magnitude = magnitudeBox_->value();
+  // The map shows true field directions; the project stores the magnet setting that gives them.
+  const MagnetCalibration& magnet = context().document->project().magnet;
+  const Vec3 nominal = magnet.nominalFieldLab(magnitudeBox_->value() * directionFromAngles(polar, azimuth));
+  const auto angles = anglesOfDirection(nominal);
   context().document->edit(tr("Field direction from the planner map"), Change::Field, [&](Project& p) {
-    p.field = FieldSetting::fromAngles(magnitude, polar, azimuth);
+    p.field = FieldSetting::fromAngles(nominal.norm(), angles[0], angles[1]);
   });
 }
 

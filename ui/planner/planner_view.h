@@ -41,7 +41,12 @@ public:
   QCustomPlot* figure() override { return mapPlot_; }
   Table dataTable() const override;
 
+protected:
+  void showEvent(QShowEvent* event) override;
+
 private:
+  /// The project's field with the magnet calibration applied (lab frame, T).
+  Vec3 trueFieldLab() const;
   void startMap();
   void cancelMap();
   void onMapReady(std::shared_ptr<const PlannerMaps> maps);
