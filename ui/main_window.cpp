@@ -26,7 +26,7 @@ namespace {
 constexpr int kMaxRecent = 8;
 }
 
-MainWindow::MainWindow(QString recoveryFolder, QWidget* parent)
+MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* parent)
     : QMainWindow(parent), document_(std::make_unique<ProjectDocument>()),
       compute_(std::make_unique<ComputeController>()) {
   setWindowIcon(QIcon(":/finestra/finestra.svg"));
@@ -81,7 +81,7 @@ MainWindow::MainWindow(QString recoveryFolder, QWidget* parent)
   });
   connect(compute_.get(), &ComputeController::resultReady, this, &MainWindow::onResult);
   connect(compute_.get(), &ComputeController::busyChanged, busy_, &QWidget::setVisible);
-  autosaver_ = std::make_unique<Autosaver>(*document_, std::move(recoveryFolder));
+  autosaver_ = std::make_unique<Autosaver>(*document_, std::move(recoveryFolder), autosaveIntervalMs);
   applyDisplay(display_);
   resize(1500, 940);
   restoreState(settings.value("window/state").toByteArray());

@@ -23,8 +23,8 @@ class LogPanel;
 class MainWindow : public QMainWindow {
   Q_OBJECT
 public:
-  /// `recoveryFolder` empty: the standard location.
-  explicit MainWindow(QString recoveryFolder = {}, QWidget* parent = nullptr);
+  /// `recoveryFolder` empty: the standard location. `autosaveIntervalMs`: period of the autosave.
+  explicit MainWindow(QString recoveryFolder = {}, int autosaveIntervalMs = 20000, QWidget* parent = nullptr);
   ~MainWindow() override;
 
   ProjectDocument& document() { return *document_; }

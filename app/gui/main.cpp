@@ -52,8 +52,9 @@ int main(int argc, char** argv) {
   const QCommandLineOption shotOption("screenshot", "Open the window, show this view, save a screenshot to --out, quit.", "view");
   const QCommandLineOption delayOption("screenshot-delay", "Milliseconds between the first result and the --screenshot grab.", "ms", "400");
   const QCommandLineOption recoveryOption("recovery-folder", "Folder for autosaved copies (testing).", "folder");
+  const QCommandLineOption autosaveOption("autosave-interval", "Milliseconds between autosaves of unsaved edits.", "ms", "20000");
   parser.addOptions({projectOption, viewOption, outOption, unitOpt, sweepOption, sizeOption, peaksOption, spectrumOption,
-                     shotOption, delayOption, recoveryOption});
+                     shotOption, delayOption, recoveryOption, autosaveOption});
   parser.process(app);
 
   QString project = parser.value(projectOption);
@@ -76,7 +77,7 @@ int main(int argc, char** argv) {
     return 2;
   }
 
-  finestra::ui::MainWindow window(parser.value(recoveryOption));
+  finestra::ui::MainWindow window(parser.value(recoveryOption), std::clamp(parser.value(autosaveOption).toInt(), 100, 3600000));
   window.show();
   if (!project.isEmpty()) window.openProject(project);
   if (parser.isSet(peaksOption)) window.importPeaks(parser.value(peaksOption));
