@@ -44,8 +44,9 @@ TEST(LineInfo, DescriptionListsEveryUnit) {
   const auto classes = solveProjectClasses(model, p);
   const OpticalLine& line = classes[0].lines[0];
   const std::string text = describeLine(0, line, model.zplGHz());
+  const std::string label = line.label();  // must outlive the loop (ASan: stack-use-after-scope)
   for (const char* part : {"class 0", "[111]", "GHz detuning", "THz", "GHz absolute", "nm (vacuum)", "nm (air)",
-                           "meV", "cm", "intensity", "polarisation", line.label().c_str()})
+                           "meV", "cm", "intensity", "polarisation", label.c_str()})
     EXPECT_NE(text.find(part), std::string::npos) << part << "\n" << text;
   // Vacuum wavelength λ = c/ν with c exact (SI 2019).
   char expected[32];
