@@ -2,6 +2,7 @@
 
 #include "core/common/simd.h"
 
+#include <Eigen/Eigenvalues>
 #include <algorithm>
 #include <cmath>
 #include <limits>
@@ -228,6 +229,15 @@ double quarticMiddleGap(const PauliForm4& f, const Vec3& b) {
   const ResolventRoots y = resolventRoots(componentsAt(f, b));
   const double s1 = std::sqrt(y.y1), s2 = std::sqrt(y.y2);
   return s1 + s2 > 0 ? (y.y1 - y.y2) / (s1 + s2) : 0.0;
+}
+
+void eigen4(const PauliForm4& form, const LinearHamiltonian4& h, const Vec3& field, ManifoldEigen4& out) {
+  if (form.closedForm && closedFormEigen4(form, field, out)) return;
+  Matrix4c m;
+  h.at(field, m);
+  const Eigen::SelfAdjointEigenSolver<Matrix4c> solver(m);
+  out.energies = solver.eigenvalues();
+  out.vectors = solver.eigenvectors();
 }
 
 FINESTRA_VECTOR_CLONES

@@ -51,4 +51,8 @@ double quarticMiddleGap(const PauliForm4& form, const Vec3& fieldCrystal);
 bool closedFormEigen4(const PauliForm4& form, const Vec3& fieldCrystal, ManifoldEigen4& out,
                       double relativeGap = 1e-7);
 
+/// Eigenpairs of h at a crystal-frame field: closedFormEigen4 where `form` allows it, the
+/// self-adjoint solver otherwise (degenerate levels, terms outside the Pauli form).
+void eigen4(const PauliForm4& form, const LinearHamiltonian4& h, const Vec3& fieldCrystal, ManifoldEigen4& out);
+
 }  // namespace finestra

@@ -1,7 +1,5 @@
 #include "core/optics/line_grid.h"
 
-#include <Eigen/Eigenvalues>
-
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
 #include "core/common/simd.h"
@@ -25,21 +23,12 @@ LineGridKernel::LineGridKernel(const CentreModel& model) {
   dipoleRatio_ = model.setup().centre.parameters.get(Param::DipoleRatio);
 }
 
-void LineGridKernel::diagonalise(const Manifold4& m, const Vec3& field, ManifoldEigen4& out) const {
-  if (m.form.closedForm && closedFormEigen4(m.form, field, out)) return;
-  Matrix4c h;
-  m.linear.at(field, h);
-  const Eigen::SelfAdjointEigenSolver<Matrix4c> solver(h);
-  out.energies = solver.eigenvalues();
-  out.vectors = solver.eigenvectors();
-}
-
 FINESTRA_VECTOR_CLONES
 void LineGridKernel::evaluate(int cls, const Vec3& field, LineGridPoint& out) const {
   const auto c = static_cast<std::size_t>(cls);
   ManifoldEigen4 g, u;
-  diagonalise(ground_[c], field, g);
-  diagonalise(excited_[c], field, u);
+  eigen4(ground_[c].form, ground_[c].linear, field, g);
+  eigen4(excited_[c].form, excited_[c].linear, field, u);
   // ⟨g_j| d_k |u_i⟩ with d_x = r σ_z, d_y = −r σ_x, d_z = 1 on the orbital (slow) index (dipole.h),
   // then a_c = Σ_k F(k, c) A_k for the crystal axes c. Real arithmetic over the four lower levels
   // j at once (structure of arrays), which the compiler turns into vector instructions.

@@ -33,7 +33,6 @@ private:
     LinearHamiltonian4 linear;
     PauliForm4 form;
   };
-  void diagonalise(const Manifold4& m, const Vec3& fieldCrystal, ManifoldEigen4& out) const;
 
   std::array<Manifold4, 4> ground_, excited_;
   double zplGHz_ = 0;

@@ -104,20 +104,17 @@ void PlannerKernel::evaluate(const Vec3& direction, double magnitudeT, std::arra
   std::array<Lines, kClassCount> lines{};
   const Vec3 field = magnitudeT * direction;
   const int firstExcited = settings_.family == LineFamily::C ? 0 : 2;
-  Matrix4c h;
-  Eigen::SelfAdjointEigenSolver<Matrix4c> groundSolver, excitedSolver;
+  ManifoldEigen4 groundEigen, excitedEigen;
   for (int cls = 0; cls < kClassCount; ++cls) {
     const ClassData& d = classes_[static_cast<std::size_t>(cls)];
     if (!d.selected) continue;
     ClassFigures& f = out[static_cast<std::size_t>(cls)];
-    d.ground.at(field, h);
-    groundSolver.compute(h);
-    d.excited.at(field, h);
-    excitedSolver.compute(h);
-    const Vector4r& eg = groundSolver.eigenvalues();
-    const Vector4r& eu = excitedSolver.eigenvalues();
-    const Matrix4c& vg = groundSolver.eigenvectors();
-    const Matrix4c& vu = excitedSolver.eigenvectors();
+    eigen4(d.groundForm, d.ground, field, groundEigen);
+    eigen4(d.excitedForm, d.excited, field, excitedEigen);
+    const Vector4r& eg = groundEigen.energies;
+    const Vector4r& eu = excitedEigen.energies;
+    const Matrix4c& vg = groundEigen.vectors;
+    const Matrix4c& vu = excitedEigen.vectors;
 
     f.qubitGHz = eg[1] - eg[0];
     f.driveGHzPerT = std::abs(vg.col(0).dot(d.driveOperator * vg.col(1)));
