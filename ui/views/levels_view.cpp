@@ -1,7 +1,6 @@
 #include "ui/views/levels_view.h"
 
 #include <QToolTip>
-#include <QVBoxLayout>
 #include <algorithm>
 #include <limits>
 
@@ -10,12 +9,7 @@
 namespace finestra::ui {
 
 LevelsView::LevelsView(const ViewContext& context, QWidget* parent)
-    : ResultView(context, parent), plot_(new QCustomPlot(this)), filter_(new ClassFilterBar(this)) {
-  auto* layout = new QVBoxLayout(this);
-  layout->setContentsMargins(4, 4, 4, 4);
-  layout->addWidget(filter_);
-  layout->addWidget(plot_, 1);
-  stylePlot(*plot_);
+    : ClassPlotView(context, false, parent) {
   plot_->plotLayout()->clear();
   excitedRect_ = new QCPAxisRect(plot_);
   groundRect_ = new QCPAxisRect(plot_);
@@ -31,21 +25,6 @@ LevelsView::LevelsView(const ViewContext& context, QWidget* parent)
   groundRect_->setMarginGroup(QCP::msLeft | QCP::msRight, margins);
   excitedRect_->axis(QCPAxis::atLeft)->setLabel(tr("excited \u00b2E\u1d64 (GHz)"));
   groundRect_->axis(QCPAxis::atLeft)->setLabel(tr("ground \u00b2E_g (GHz)"));
-  plot_->setMouseTracking(true);
-  connect(plot_, &QCustomPlot::mouseMove, this, &LevelsView::onMouseMove);
-  connect(filter_, &ClassFilterBar::filterChanged, this, &LevelsView::rebuild);
-  filter_->applyPalette(palette(), false);
-}
-
-void LevelsView::showResult(const ResultPtr& result) {
-  result_ = result;
-  rebuild();
-}
-
-void LevelsView::applyDisplay(const DisplaySettings& display) {
-  ResultView::applyDisplay(display);
-  filter_->applyPalette(palette(), false);
-  rebuild();
 }
 
 void LevelsView::rebuild() {

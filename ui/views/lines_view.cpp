@@ -1,7 +1,6 @@
 #include "ui/views/lines_view.h"
 
 #include <QToolTip>
-#include <QVBoxLayout>
 #include <algorithm>
 
 #include "core/optics/line_info.h"
@@ -17,35 +16,18 @@ constexpr std::array<double, 4> kBinSize{4.5, 3.6, 2.8, 2.2};
 }  // namespace
 
 LinesView::LinesView(const ViewContext& context, QWidget* parent)
-    : ResultView(context, parent), plot_(new QCustomPlot(this)), filter_(new ClassFilterBar(this)) {
-  auto* layout = new QVBoxLayout(this);
-  layout->setContentsMargins(4, 4, 4, 4);
-  layout->addWidget(filter_);
-  layout->addWidget(plot_, 1);
-  stylePlot(*plot_);
+    : ClassPlotView(context, true, parent) {
   plot_->legend->setVisible(true);
   plot_->axisRect()->insetLayout()->setInsetAlignment(0, Qt::AlignTop | Qt::AlignRight);
-  plot_->setMouseTracking(true);
-  connect(plot_, &QCustomPlot::mouseMove, this, &LinesView::onMouseMove);
   connect(plot_, &QCustomPlot::mousePress, this, &LinesView::onMousePress);
-  connect(filter_, &ClassFilterBar::filterChanged, this, &LinesView::rebuild);
-  filter_->applyPalette(palette(), true);
   if (context.document)
     connect(context.document, &ProjectDocument::changed, this, [this](Changes what) {
       if (what & Change::Fit) rebuild();
     });
 }
 
-void LinesView::showResult(const ResultPtr& result) {
-  result_ = result;
+void LinesView::resultArrived() {
   pinnedLabels_ = result_ && result_->error.isEmpty() ? pinnedLabels(result_->project) : QVector<PeakLabel>{};
-  rebuild();
-}
-
-void LinesView::applyDisplay(const DisplaySettings& display) {
-  ResultView::applyDisplay(display);
-  filter_->applyPalette(palette(), true);
-  rebuild();
 }
 
 void LinesView::rebuild() {

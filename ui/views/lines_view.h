@@ -5,31 +5,25 @@
 // uncertainty; clicking one asks for the nearest predicted lines. A peak matched to a line (pinned
 // in the project, or by the last fit or assignment of the session) carries its label, e.g. "C1·cl0".
 #include "ui/document.h"
-#include "ui/result_view.h"
-#include "ui/views/plot_helpers.h"
+#include "ui/views/class_plot_view.h"
 
 namespace finestra::ui {
 
-class LinesView : public ResultView {
+class LinesView : public ClassPlotView {
   Q_OBJECT
 public:
   explicit LinesView(const ViewContext& context, QWidget* parent = nullptr);
-  void showResult(const ResultPtr& result) override;
-  void applyDisplay(const DisplaySettings& display) override;
-  QCustomPlot* figure() override { return plot_; }
   Table dataTable() const override;
 
 private:
-  void rebuild();
+  void rebuild() override;
+  void resultArrived() override;
   void addPeakLabels();
-  void onMouseMove(QMouseEvent* event);
+  void onMouseMove(QMouseEvent* event) override;
   void onMousePress(QMouseEvent* event);
   /// Nearest measured peak to a pixel position within `radius` pixels, as an index into peaks.
   qsizetype peakAt(const QPointF& pixel, double radius) const;
 
-  QCustomPlot* plot_ = nullptr;
-  ClassFilterBar* filter_ = nullptr;
-  ResultPtr result_;
   QVector<PeakLabel> pinnedLabels_;  ///< of result_->project
 };
 

@@ -1,7 +1,6 @@
 #include "ui/views/spectrum_view.h"
 
 #include <QToolTip>
-#include <QVBoxLayout>
 #include <algorithm>
 
 #include "core/optics/line_info.h"
@@ -13,33 +12,13 @@ constexpr int kLabelledSticks = 16;
 }
 
 SpectrumView::SpectrumView(const ViewContext& context, QWidget* parent)
-    : ResultView(context, parent), plot_(new QCustomPlot(this)), filter_(new ClassFilterBar(this)) {
-  auto* layout = new QVBoxLayout(this);
-  layout->setContentsMargins(4, 4, 4, 4);
-  layout->addWidget(filter_);
-  layout->addWidget(plot_, 1);
-  stylePlot(*plot_);
+    : ClassPlotView(context, true, parent) {
   plot_->legend->setVisible(true);
   plot_->yAxis->setLabel(tr("intensity (arb. units)"));
-  plot_->setMouseTracking(true);
-  connect(plot_, &QCustomPlot::mouseMove, this, &SpectrumView::onMouseMove);
-  connect(filter_, &ClassFilterBar::filterChanged, this, &SpectrumView::rebuild);
   if (context.document)
     connect(context.document, &ProjectDocument::changed, this, [this](Changes what) {
       if (what & Change::MeasuredSpectrum) rebuild();
     });
-  filter_->applyPalette(palette(), true);
-}
-
-void SpectrumView::showResult(const ResultPtr& result) {
-  result_ = result;
-  rebuild();
-}
-
-void SpectrumView::applyDisplay(const DisplaySettings& display) {
-  ResultView::applyDisplay(display);
-  filter_->applyPalette(palette(), true);
-  rebuild();
 }
 
 SpectrumPlotData SpectrumView::plotData() const {

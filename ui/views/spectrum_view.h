@@ -1,28 +1,21 @@
 #pragma once
 // Simulated spectrum at the current field on the chosen spectral axis: the summed curve, one
 // stick per line (coloured by class, strongest labelled) and the imported measured spectrum.
-#include "ui/result_view.h"
-#include "ui/views/plot_helpers.h"
+#include "ui/views/class_plot_view.h"
 
 namespace finestra::ui {
 
-class SpectrumView : public ResultView {
+class SpectrumView : public ClassPlotView {
   Q_OBJECT
 public:
   explicit SpectrumView(const ViewContext& context, QWidget* parent = nullptr);
-  void showResult(const ResultPtr& result) override;
-  void applyDisplay(const DisplaySettings& display) override;
-  QCustomPlot* figure() override { return plot_; }
   Table dataTable() const override;
 
 private:
-  void rebuild();
-  void onMouseMove(QMouseEvent* event);
+  void rebuild() override;
+  void onMouseMove(QMouseEvent* event) override;
   SpectrumPlotData plotData() const;
 
-  QCustomPlot* plot_ = nullptr;
-  ClassFilterBar* filter_ = nullptr;
-  ResultPtr result_;
 };
 
 }  // namespace finestra::ui
