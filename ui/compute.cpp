@@ -1,12 +1,54 @@
 #include "ui/compute.h"
 
-#include <spdlog/spdlog.h>
+#include <QElapsedTimer>
 
 #include "core/common/errors.h"
 #include "core/model/evaluate.h"
 #include "core/optics/line_info.h"
+#include "ui/fit/fit_runner.h"
 
 namespace finestra::ui {
+namespace {
+
+SweepPart computeSweepPart(const CentreModel& model, const ComputeRequest& request, const ProgressControl& control) {
+  SweepPart part;
+  part.spec = activeSweep(request.project, request.sweepIndex);
+  const LabFrame& lab = model.setup().lab;
+  part.currentX = sweepCoordinate(part.spec, lab, request.project.field);
+  part.result = runSweep(model, request.project, part.spec, control);
+  part.peaks = makePeakMarks(request.project, part.spec, lab, model.zplGHz(), request.unit);
+  return part;
+}
+
+SpectrumPart computeSpectrumPart(const CentreModel& model, const std::vector<ClassSolution>& current,
+                                 const ComputeRequest& request) {
+  const auto weighted = weightLines(model, current, request.spectrumKind);
+  const auto range = autoRange(model, weighted, request.unit);
+  SpectrumPart part;
+  part.curve = computeSpectrum(model, weighted, request.unit, range[0], range[1], request.spectrumPoints);
+  part.plot = makeSpectrumPlotData(part.curve, current, weighted, model.zplGHz(), request.unit);
+  return part;
+}
+
+/// The assignment with the current parameters: core's fit driver with nothing free and one start.
+void computeAssignment(ComputeResult& result, const ProgressControl& control) {
+  if (result.project.measurements.empty()) return;
+  FitOptions options = assignOnlyOptions();
+  options.progress.cancel = control.cancel;
+  try {
+    result.assignment = fitProject(result.project, options);
+  } catch (const InputError& e) {
+    result.assignmentError = QString::fromStdString(e.what());
+  }
+}
+
+}  // namespace
+
+Parts withInputs(Parts parts) {
+  if (parts & (Part::LevelFans | Part::LineMap)) parts |= Part::Sweep;
+  if (parts & Part::Spectrum) parts |= Part::Solution;
+  return parts;
+}
 
 SweepSpec activeSweep(const Project& project, int sweepIndex) {
   if (sweepIndex >= 0 && static_cast<std::size_t>(sweepIndex) < project.sweeps.size())
@@ -20,32 +62,26 @@ SweepSpec activeSweep(const Project& project, int sweepIndex) {
   return fallback;
 }
 
-ResultPtr computeNow(const ComputeRequest& request, const std::atomic<bool>* cancel) {
+ResultPtr computeNow(const ComputeRequest& request, const ProgressControl& control) {
   QElapsedTimer timer;
   timer.start();
   auto result = std::make_shared<ComputeResult>();
   result->generation = request.generation;
   result->project = request.project;
-  result->sweep = activeSweep(request.project, request.sweepIndex);
-  ProgressControl control;
-  control.cancel = cancel;
+  const Parts parts = withInputs(request.parts);
   try {
     auto model = std::make_shared<const CentreModel>(makeModelSetup(request.project));
     control.throwIfCancelled();
-    result->current = solveProjectClasses(*model, request.project);
-    const LabFrame& lab = model->setup().lab;
-    result->currentX = sweepCoordinate(result->sweep, lab, request.project.field);
-    result->sweepResult = runSweep(*model, request.project, result->sweep, control);
+    if (parts & Part::Solution) result->current = solveProjectClasses(*model, request.project);
+    if (parts & Part::Sweep) result->sweep = computeSweepPart(*model, request, control);
     control.throwIfCancelled();
-    const auto weighted = weightLines(*model, result->current, request.spectrumKind);
-    const auto range = autoRange(*model, weighted, request.unit);
-    result->spectrum = computeSpectrum(*model, weighted, request.unit, range[0], range[1], request.spectrumPoints);
-    result->levels = makeLevelPlotData(result->sweepResult);
-    result->lines = makeLinePlotData(result->sweepResult, model->zplGHz(), request.unit);
-    result->peaks = makePeakMarks(request.project, result->sweep, lab, model->zplGHz(), request.unit);
-    result->spectrumPlot =
-        makeSpectrumPlotData(result->spectrum, result->current, weighted, model->zplGHz(), request.unit);
+    if (parts & Part::LevelFans) result->levels = makeLevelPlotData(result->sweep->result);
+    if (parts & Part::LineMap)
+      result->lines = makeLinePlotData(result->sweep->result, model->zplGHz(), request.unit);
+    if (parts & Part::Spectrum) result->spectrum = computeSpectrumPart(*model, result->current, request);
+    if (parts & Part::Assignment) computeAssignment(*result, control);
     result->model = std::move(model);
+    result->parts = parts;
   } catch (const InputError& e) {
     result->error = QString::fromStdString(e.what());
   }
@@ -53,82 +89,34 @@ ResultPtr computeNow(const ComputeRequest& request, const std::atomic<bool>* can
   return result;
 }
 
-void ComputeWorker::compute(const ComputeRequest& request, const std::shared_ptr<std::atomic<bool>>& cancel) {
-  if (request.generation < latestGeneration_->load() || cancel->load()) {
-    Q_EMIT cancelled(request.generation);  // superseded before it started
-    return;
-  }
-  try {
-    Q_EMIT finished(computeNow(request, cancel.get()));
-  } catch (const Cancelled&) {
-    Q_EMIT cancelled(request.generation);
-  } catch (const std::exception& e) {
-    spdlog::error("computation failed: {}", e.what());
-    auto failed = std::make_shared<ComputeResult>();
-    failed->generation = request.generation;
-    failed->project = request.project;
-    failed->error = QString::fromStdString(e.what());
-    Q_EMIT finished(failed);
-  }
-}
-
-ComputeController::ComputeController(QObject* parent) : QObject(parent) {
+ComputeController::ComputeController(JobBoard* board, QObject* parent)
+    : QObject(parent), runner_(QStringLiteral("model result"), board) {
   qRegisterMetaType<ResultPtr>("finestra::ui::ResultPtr");
-  auto* worker = new ComputeWorker(latest_);  // owned by the thread: deleted on thread finish
-  worker->moveToThread(&thread_);
-  worker_ = worker;
-  connect(&thread_, &QThread::finished, worker, &QObject::deleteLater);
-  connect(worker, &ComputeWorker::finished, this, &ComputeController::onFinished, Qt::QueuedConnection);
-  connect(
-      worker, &ComputeWorker::cancelled, this,
-      [this](quint64 generation) {
-        Q_EMIT computeCancelled(generation);
-        if (generation == latest_->load()) setBusy(false);
-      },
-      Qt::QueuedConnection);
-  thread_.setObjectName("finestra-compute");
-  thread_.start();
-}
-
-ComputeController::~ComputeController() {
-  cancel();
-  thread_.quit();
-  thread_.wait();
+  connect(&runner_, &JobRunner::busyChanged, this, &ComputeController::busyChanged);
+  connect(&runner_, &JobRunner::progress, this, &ComputeController::progress);
+  connect(&runner_, &JobRunner::cancelled, this, &ComputeController::computeCancelled);
+  connect(&runner_, &JobRunner::failed, this, [this](quint64 generation, const QString& message) {
+    // Not an input error (those come back inside the result): report it like one, never crash.
+    auto failed = std::make_shared<ComputeResult>();
+    failed->generation = generation;
+    failed->error = message;
+    last_ = failed;
+    Q_EMIT resultReady(failed);
+  });
 }
 
 quint64 ComputeController::request(ComputeRequest request) {
-  cancel();
-  const quint64 generation = latest_->load() + 1;
-  latest_->store(generation);
+  // The job id is the generation: the runner hands over only the newest job's result.
+  const quint64 generation = runner_.currentJob() + 1;
   request.generation = generation;
-  cancelFlag_ = std::make_shared<std::atomic<bool>>(false);
-  setBusy(true);
-  QMetaObject::invokeMethod(
-      worker_, [worker = worker_, request = std::move(request), flag = cancelFlag_] {
-        if (worker) worker->compute(request, flag);
-      },
-      Qt::QueuedConnection);
+  runner_.start([this, request = std::move(request)](const ProgressControl& control) -> JobDelivery {
+    ResultPtr result = computeNow(request, control);
+    return [this, result] {
+      last_ = result;
+      Q_EMIT resultReady(result);
+    };
+  });
   return generation;
-}
-
-void ComputeController::cancel() {
-  if (cancelFlag_) cancelFlag_->store(true);
-}
-
-void ComputeController::onFinished(const ResultPtr& result) {
-  if (result->generation != latest_->load()) {
-    spdlog::debug("dropped stale result of generation {}", result->generation);
-    return;
-  }
-  last_ = result;
-  setBusy(false);
-  Q_EMIT resultReady(result);
-}
-
-void ComputeController::setBusy(bool busy) {
-  if (busy_ == busy) return;
-  busy_ = busy;
-  Q_EMIT busyChanged(busy);
 }
 
 }  // namespace finestra::ui

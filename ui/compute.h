@@ -1,26 +1,48 @@
 #pragma once
-// Background computation. The GUI hands a snapshot of the project (a copy) to a worker living on
-// its own QThread; the worker builds the model, solves the current point, runs the active sweep
-// and converts everything into plot data. Results come back by shared pointer through a queued
-// signal. Each request gets a generation number: a newer request cancels the older one (through a
-// std::atomic<bool> the core polls) and results of any older generation are dropped.
-#include <QElapsedTimer>
+// Model results for the views. A request carries a snapshot of the project and the parts the
+// shown (or exported) views ask for; the worker computes only those parts and what they are made
+// from, on a JobRunner (ui/jobs/job_runner.h): a newer request cancels the older one and results
+// of older requests are dropped. Results come back by shared pointer.
 #include <QObject>
-#include <QPointer>
-#include <QThread>
-#include <atomic>
+#include <QString>
 #include <memory>
 #include <optional>
 
+#include "core/fit/project_fit.h"
 #include "core/io/project.h"
 #include "core/optics/spectrum.h"
 #include "core/sweep/sweep.h"
+#include "ui/jobs/job_runner.h"
 #include "ui/plot_data.h"
 
 namespace finestra::ui {
 
+class JobBoard;
+
+/// The pieces of a model result a view can ask for. The model itself is always built.
+enum class Part : unsigned {
+  Solution = 1u << 0,    ///< every selected class solved at the project's field
+  Sweep = 1u << 1,       ///< the active sweep, the current point on its axis and the measured peaks on it
+  LevelFans = 1u << 2,   ///< tracked levels ready to draw (made from Sweep)
+  LineMap = 1u << 3,     ///< line points ready to draw (made from Sweep)
+  Spectrum = 1u << 4,    ///< simulated spectrum and its sticks (made from Solution)
+  Assignment = 1u << 5,  ///< measured peaks matched to lines with the current parameters
+};
+Q_DECLARE_FLAGS(Parts, Part)
+}  // namespace finestra::ui
+// At global scope, like Qt's own: inside the namespace they would hide QCustomPlot's operators.
+Q_DECLARE_OPERATORS_FOR_FLAGS(finestra::ui::Parts)
+namespace finestra::ui {
+
+inline constexpr Parts kAllParts = Parts(Part::Solution) | Part::Sweep | Part::LevelFans | Part::LineMap |
+                                   Part::Spectrum | Part::Assignment;
+
+/// `parts` together with every part they are made from.
+Parts withInputs(Parts parts);
+
 struct ComputeRequest {
   Project project;
+  Parts parts = kAllParts;
   int sweepIndex = 0;  ///< index into project.sweeps; a default magnitude sweep when there is none
   SpectralUnit unit = SpectralUnit::GHzDetuning;
   SpectrumKind spectrumKind = SpectrumKind::Emission;
@@ -28,19 +50,32 @@ struct ComputeRequest {
   quint64 generation = 0;
 };
 
+/// The active sweep solved, with what the sweep plots place on it.
+struct SweepPart {
+  SweepSpec spec;
+  SweepResult result;
+  std::optional<double> currentX;  ///< the project's field on the sweep axis
+  QVector<PeakMark> peaks;         ///< measured peaks that lie on the sweep's axis
+};
+
+struct SpectrumPart {
+  SpectrumCurve curve;
+  SpectrumPlotData plot;
+};
+
+/// One model result: the parts asked for (see `parts`), each present exactly when its flag is set.
 struct ComputeResult {
   quint64 generation = 0;
   Project project;
-  SweepSpec sweep;
-  std::shared_ptr<const CentreModel> model;  ///< null when the setup could not be built
-  std::vector<ClassSolution> current;        ///< every selected class at the project's field
-  std::optional<double> currentX;            ///< the project's field on the sweep axis
-  SweepResult sweepResult;
-  SpectrumCurve spectrum;
-  LevelPlotData levels;
-  LinePlotData lines;
-  QVector<PeakMark> peaks;
-  SpectrumPlotData spectrumPlot;
+  Parts parts;                                ///< the parts computed (asked for + their inputs)
+  std::shared_ptr<const CentreModel> model;   ///< null when the setup could not be built
+  std::vector<ClassSolution> current;         ///< Part::Solution
+  std::optional<SweepPart> sweep;             ///< Part::Sweep
+  std::optional<LevelPlotData> levels;        ///< Part::LevelFans
+  std::optional<LinePlotData> lines;          ///< Part::LineMap
+  std::optional<SpectrumPart> spectrum;       ///< Part::Spectrum
+  std::optional<FitResult> assignment;        ///< Part::Assignment, when the project has measured peaks
+  QString assignmentError;                    ///< why the assignment could not be made
   double elapsedMs = 0;
   QString error;  ///< non-empty: the setup is invalid, message names the key at fault
 };
@@ -49,38 +84,24 @@ using ResultPtr = std::shared_ptr<const ComputeResult>;
 /// The sweep a request uses (the chosen one, or 0–3 T along the project's field when none).
 SweepSpec activeSweep(const Project& project, int sweepIndex);
 
-/// Runs one request on the calling thread. Throws Cancelled when `cancel` is set meanwhile.
-ResultPtr computeNow(const ComputeRequest& request, const std::atomic<bool>* cancel = nullptr);
+/// Runs one request on the calling thread. Throws Cancelled when `control` is cancelled meanwhile.
+ResultPtr computeNow(const ComputeRequest& request, const ProgressControl& control = {});
 
-class ComputeWorker : public QObject {
-  Q_OBJECT
-public:
-  explicit ComputeWorker(std::shared_ptr<const std::atomic<quint64>> latestGeneration)
-      : latestGeneration_(std::move(latestGeneration)) {}
-  void compute(const ComputeRequest& request, const std::shared_ptr<std::atomic<bool>>& cancel);
-
-Q_SIGNALS:
-  void finished(finestra::ui::ResultPtr result);
-  void cancelled(quint64 generation);
-  void progress(quint64 generation, double fraction);
-
-private:
-  std::shared_ptr<const std::atomic<quint64>> latestGeneration_;
-};
-
+/// Model results for the main window: one job at a time on a JobRunner, newest request wins.
 class ComputeController : public QObject {
   Q_OBJECT
 public:
-  explicit ComputeController(QObject* parent = nullptr);
-  ~ComputeController() override;
+  explicit ComputeController(JobBoard* board = nullptr, QObject* parent = nullptr);
 
-  /// Queues a computation of a copy of `request.project`; cancels the one in flight.
+  /// Queues a computation of a copy of `request.project`; cancels the one in flight. Returns the
+  /// request's generation at once.
   quint64 request(ComputeRequest request);
   /// Cancels the computation in flight (if any).
-  void cancel();
-  bool busy() const { return busy_; }
-  quint64 latestGeneration() const { return latest_->load(); }
+  void cancel() { runner_.cancel(); }
+  bool busy() const { return runner_.busy(); }
+  quint64 latestGeneration() const { return runner_.currentJob(); }
   ResultPtr lastResult() const { return last_; }
+  JobRunner& runner() { return runner_; }
 
 Q_SIGNALS:
   void resultReady(finestra::ui::ResultPtr result);
@@ -89,15 +110,8 @@ Q_SIGNALS:
   void progress(double fraction);
 
 private:
-  void onFinished(const ResultPtr& result);
-  void setBusy(bool busy);
-
-  QThread thread_;
-  QPointer<ComputeWorker> worker_;
-  std::shared_ptr<std::atomic<quint64>> latest_ = std::make_shared<std::atomic<quint64>>(0);
-  std::shared_ptr<std::atomic<bool>> cancelFlag_;
+  JobRunner runner_;
   ResultPtr last_;
-  bool busy_ = false;
 };
 
 }  // namespace finestra::ui

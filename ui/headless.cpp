@@ -27,6 +27,7 @@ void runHeadlessExport(const HeadlessExport& job) {
   if (!job.spectrumCsv.isEmpty()) document.setMeasuredSpectrum(readSpectrumCsv(job.spectrumCsv.toStdString()));
   ComputeRequest request;
   request.project = document.project();
+  request.parts = entry->parts;
   request.sweepIndex = job.display.sweepIndex;
   request.unit = job.display.unit;
   request.spectrumKind = job.display.spectrumKind;

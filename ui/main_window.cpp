@@ -27,8 +27,8 @@ constexpr int kMaxRecent = 8;
 }
 
 MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* parent)
-    : QMainWindow(parent), document_(std::make_unique<ProjectDocument>()),
-      compute_(std::make_unique<ComputeController>()) {
+    : QMainWindow(parent), document_(std::make_unique<ProjectDocument>()), jobs_(std::make_unique<JobBoard>()),
+      compute_(std::make_unique<ComputeController>(jobs_.get())) {
   setWindowIcon(QIcon(":/finestra/finestra.svg"));
   QSettings settings;
   display_.unit = static_cast<SpectralUnit>(settings.value("display/unit", static_cast<int>(SpectralUnit::GHzDetuning)).toInt());
@@ -39,14 +39,15 @@ MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* 
   log_->attachToDefaultLogger();
   tabs_ = new QTabWidget;
   tabs_->setDocumentMode(true);
-  const ViewContext context{document_.get(), compute_.get()};
+  const ViewContext context{document_.get(), compute_.get(), jobs_.get()};
   for (const ViewEntry& entry : viewCatalogue()) {
     std::unique_ptr<ResultView> v = entry.make(context);
     ResultView* raw = v.get();
     tabs_->addTab(v.release(), entry.title);  // the tab widget owns the view from here
-    views_.emplace_back(entry.key, raw);
+    views_.push_back({entry.key, raw, entry.parts, false});
     connect(raw, &ResultView::peakClicked, this, &MainWindow::onPeakClicked);
   }
+  connect(tabs_, &QTabWidget::currentChanged, this, &MainWindow::onTabChanged);
   setCentralWidget(tabs_);
 
   setup_ = new SetupPanel(*document_);
@@ -80,7 +81,7 @@ MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* 
     requestCompute();
   });
   connect(compute_.get(), &ComputeController::resultReady, this, &MainWindow::onResult);
-  connect(compute_.get(), &ComputeController::busyChanged, busy_, &QWidget::setVisible);
+  connect(jobs_.get(), &JobBoard::anyBusyChanged, busy_, &QWidget::setVisible);
   autosaver_ = std::make_unique<Autosaver>(*document_, std::move(recoveryFolder), autosaveIntervalMs);
   applyDisplay(display_);
   resize(1500, 940);
@@ -137,7 +138,7 @@ void MainWindow::buildMenus() {
     PreferencesDialog dialog(display_, this);
     if (dialog.exec() == QDialog::Accepted) applyDisplay(dialog.chosen());
   });
-  edit->addAction(tr("&Cancel computation"), QKeySequence(Qt::Key_Escape), this, [this] { compute_->cancel(); });
+  edit->addAction(tr("&Cancel computation"), QKeySequence(Qt::Key_Escape), this, [this] { jobs_->cancelAll(); });
 
   QMenu* help = menuBar()->addMenu(tr("&Help"));
   help->addAction(tr("&About Finestra and safety"), this, [this] { AboutDialog(this).exec(); });
@@ -155,13 +156,15 @@ void MainWindow::applyDisplay(const DisplaySettings& display) {
   settings.setValue("display/unit", static_cast<int>(display_.unit));
   settings.setValue("display/kind", display_.spectrumKind == SpectrumKind::Emission ? 0 : 1);
   settings.setValue("display/palette", display_.palette);
-  for (auto& [key, v] : views_) v->applyDisplay(display_);
+  for (const ShownView& v : views_) v.view->applyDisplay(display_);
   if (recompute) requestCompute();
 }
 
 void MainWindow::requestCompute() {
   ComputeRequest request;
   request.project = document_->project();
+  request.parts = shownParts();
+  requestedParts_ = request.parts;
   request.sweepIndex = display_.sweepIndex;
   request.unit = display_.unit;
   request.spectrumKind = display_.spectrumKind;
@@ -173,12 +176,31 @@ void MainWindow::onResult(const ResultPtr& result) {
     computeLabel_->setText(tr("setup incomplete"));
     statusBar()->showMessage(result->error, 15000);
     spdlog::warn("cannot compute: {}", result->error.toStdString());
-  } else {
-    std::size_t points = result->sweepResult.x.size() * result->sweepResult.classes.size();
+  } else if (result->sweep) {
+    std::size_t points = result->sweep->result.x.size() * result->sweep->result.classes.size();
     computeLabel_->setText(tr("computed %1 sweep points in %2 ms").arg(points).arg(result->elapsedMs, 0, 'f', 1));
+  } else {
+    computeLabel_->setText(tr("computed in %1 ms").arg(result->elapsedMs, 0, 'f', 1));
   }
-  for (auto& [key, v] : views_) v->showResult(result);
+  // A failed setup reaches every view (each shows it is empty); otherwise a view gets the result
+  // only when it holds the view's parts.
+  for (ShownView& v : views_) {
+    v.stale = result->error.isEmpty() && (result->parts & v.parts) != v.parts;
+    if (!v.stale) v.view->showResult(result);
+  }
   Q_EMIT resultShown(result);
+}
+
+Parts MainWindow::shownParts() const {
+  const int index = tabs_->currentIndex();
+  return index >= 0 ? views_[static_cast<std::size_t>(index)].parts : Parts{};
+}
+
+void MainWindow::onTabChanged() {
+  const int index = tabs_->currentIndex();
+  if (index < 0) return;
+  const ShownView& shown = views_[static_cast<std::size_t>(index)];
+  if (shown.stale || (requestedParts_ & shown.parts) != shown.parts) requestCompute();
 }
 
 void MainWindow::updateTitle() {
@@ -241,7 +263,7 @@ bool MainWindow::importSpectrum(const QString& path, std::optional<SpectralUnit>
 
 bool MainWindow::showView(const QString& key) {
   for (std::size_t i = 0; i < views_.size(); ++i)
-    if (views_[i].first == key) {
+    if (views_[i].key == key) {
       tabs_->setCurrentIndex(static_cast<int>(i));
       return true;
     }
@@ -249,8 +271,8 @@ bool MainWindow::showView(const QString& key) {
 }
 
 ResultView* MainWindow::view(const QString& key) const {
-  for (const auto& [k, v] : views_)
-    if (k == key) return v;
+  for (const ShownView& v : views_)
+    if (v.key == key) return v.view;
   return nullptr;
 }
 
@@ -388,7 +410,7 @@ void MainWindow::closeEvent(QCloseEvent* event) {
     return;
   }
   QSettings().setValue("window/state", saveState());
-  compute_->cancel();
+  jobs_->cancelAll();
   autosaver_->finishCleanly();
   event->accept();
 }

@@ -1,7 +1,9 @@
 #pragma once
 // The main window: setup panel (left dock), result views as tabs (from viewCatalogue()), log
-// panel (bottom dock), status bar with compute time. Owns the document, the compute controller
-// and the autosaver; wires them together. Holds no physics.
+// panel (bottom dock), status bar with compute time. Owns the document, the job board, the compute
+// controller and the autosaver; wires them together. Holds no physics. Model results are computed
+// with the parts the shown view asks for; a view whose parts a result lacks is refreshed when it is
+// shown again.
 #include <QLabel>
 #include <QMainWindow>
 #include <QMenu>
@@ -13,6 +15,7 @@
 #include "ui/autosave.h"
 #include "ui/compute.h"
 #include "ui/document.h"
+#include "ui/jobs/job_board.h"
 #include "ui/result_view.h"
 
 namespace finestra::ui {
@@ -29,6 +32,7 @@ public:
 
   ProjectDocument& document() { return *document_; }
   ComputeController& compute() { return *compute_; }
+  JobBoard& jobs() { return *jobs_; }
   /// Opens a project; on error shows the message and keeps the current document. Returns success.
   bool openProject(const QString& path);
   bool importPeaks(const QString& path);
@@ -50,6 +54,9 @@ private:
   void buildMenus();
   void requestCompute();
   void onResult(const ResultPtr& result);
+  void onTabChanged();
+  /// The parts the shown view draws.
+  Parts shownParts() const;
   void updateTitle();
   bool maybeSave();
   bool save();
@@ -62,16 +69,24 @@ private:
   void onPeakClicked(int measurement, int peak);
 
   std::unique_ptr<ProjectDocument> document_;
+  std::unique_ptr<JobBoard> jobs_;
   std::unique_ptr<ComputeController> compute_;
   std::unique_ptr<Autosaver> autosaver_;
   SetupPanel* setup_ = nullptr;
   LogPanel* log_ = nullptr;
   QTabWidget* tabs_ = nullptr;
-  std::vector<std::pair<QString, ResultView*>> views_;
+  struct ShownView {
+    QString key;
+    ResultView* view = nullptr;
+    Parts parts;
+    bool stale = false;  ///< the last result lacked its parts: it shows an older one
+  };
+  std::vector<ShownView> views_;
   QLabel* computeLabel_ = nullptr;
   QProgressBar* busy_ = nullptr;
   QMenu* recentMenu_ = nullptr;
   DisplaySettings display_;
+  Parts requestedParts_;  ///< of the latest compute request
 };
 
 }  // namespace finestra::ui

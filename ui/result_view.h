@@ -1,9 +1,11 @@
 #pragma once
-// Extension point for result views. A view is a tab in the main window that receives every new
-// result and the display settings; it may offer a figure (QCustomPlot) and a data table for
-// export. To add a view, derive from ResultView and add ONE line to viewCatalogue() in
-// ui/view_catalogue.cpp: { "key", "Tab title", makeView<YourView> }. The key is also accepted by
-// the headless export (finestra --export-view key).
+// Extension point for result views. A view is a tab in the main window that receives the model
+// results carrying the parts it asked for, and the display settings; it may offer a figure
+// (QCustomPlot) and a data table for export. To add a view, derive from ResultView and add ONE
+// line to viewCatalogue() in ui/view_catalogue.cpp: { "key", "Tab title", makeView<YourView>,
+// parts }, where `parts` (ui/compute.h) are the pieces of the result it draws; only the parts of
+// the shown or exported views are computed. The key is also accepted by the headless export
+// (finestra --export-view key).
 #include <QString>
 #include <QWidget>
 #include <array>
@@ -21,6 +23,7 @@ namespace finestra::ui {
 
 class ProjectDocument;
 class ComputeController;
+class JobBoard;
 
 struct DisplaySettings {
   SpectralUnit unit = SpectralUnit::GHzDetuning;
@@ -30,17 +33,20 @@ struct DisplaySettings {
 };
 
 /// What a view may use besides its results: the document (for edits such as moving the current
-/// point) and the compute controller (for on-demand lookups with the latest model).
+/// point), the compute controller (for on-demand lookups with the latest model) and the job board
+/// its own JobRunner registers with (long jobs of its own, cancelled by Esc with all others).
+/// Every member may be null (headless export, tests).
 struct ViewContext {
   ProjectDocument* document = nullptr;
   ComputeController* compute = nullptr;
+  JobBoard* jobs = nullptr;
 };
 
 class ResultView : public QWidget {
   Q_OBJECT
 public:
   explicit ResultView(const ViewContext& context, QWidget* parent = nullptr) : QWidget(parent), context_(context) {}
-  /// Called with every accepted result (never a stale one).
+  /// Called with every accepted result that holds the view's parts (never a stale one).
   virtual void showResult(const ResultPtr& result) = 0;
   /// Called when units or palette change (a new result follows if the unit changed).
   virtual void applyDisplay(const DisplaySettings& display) { display_ = display; }
@@ -67,6 +73,7 @@ struct ViewEntry {
   QString key;    ///< stable id for settings and the command line, e.g. "lines"
   QString title;  ///< tab text
   std::function<std::unique_ptr<ResultView>(const ViewContext&)> make;
+  Parts parts;    ///< the parts of a model result the view draws (the model itself always comes)
 };
 
 template <typename View>

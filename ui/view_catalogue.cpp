@@ -10,12 +10,12 @@ namespace finestra::ui {
 
 const std::vector<ViewEntry>& viewCatalogue() {
   static const std::vector<ViewEntry> views{
-      {"levels", "Level fans", makeView<LevelsView>},
-      {"lines", "Line map", makeView<LinesView>},
-      {"spectrum", "Spectrum", makeView<SpectrumView>},
-      {"table", "Line table", makeView<LineTableView>},
-      {"planner", "Magnet planner", makeView<PlannerView>},
-      {"fit", "Assignment and fit", makeView<FitView>},
+      {"levels", "Level fans", makeView<LevelsView>, Part::LevelFans},
+      {"lines", "Line map", makeView<LinesView>, Part::LineMap},
+      {"spectrum", "Spectrum", makeView<SpectrumView>, Part::Spectrum},
+      {"table", "Line table", makeView<LineTableView>, Part::Solution},
+      {"planner", "Magnet planner", makeView<PlannerView>, {}},
+      {"fit", "Assignment and fit", makeView<FitView>, Part::Assignment},
   };
   return views;
 }

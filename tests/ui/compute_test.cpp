@@ -51,7 +51,29 @@ TEST(ComputeWorker, OnlyTheNewestRequestIsDelivered) {
   ASSERT_EQ(ready.count(), 1);
   const auto result = ready.front().front().value<ResultPtr>();
   EXPECT_EQ(result->generation, last);
-  EXPECT_EQ(result->sweepResult.x.size(), 301u);
+  EXPECT_EQ(result->sweep->result.x.size(), 301u);
+}
+
+TEST(ComputeWorker, OnlyTheAskedPartsAreComputed) {
+  ComputeRequest levels = exampleRequest(50);
+  levels.parts = Part::LevelFans;
+  const ResultPtr a = computeNow(levels);
+  ASSERT_TRUE(a->error.isEmpty()) << a->error.toStdString();
+  EXPECT_EQ(a->parts, Parts(Part::LevelFans) | Part::Sweep);
+  EXPECT_TRUE(a->sweep && a->levels);
+  EXPECT_FALSE(a->lines || a->spectrum || a->assignment);
+  EXPECT_TRUE(a->current.empty());
+  ComputeRequest spectrum = exampleRequest(50);
+  spectrum.parts = Part::Spectrum;
+  const ResultPtr b = computeNow(spectrum);
+  EXPECT_EQ(b->parts, Parts(Part::Spectrum) | Part::Solution);
+  EXPECT_TRUE(b->spectrum && !b->current.empty());
+  EXPECT_FALSE(b->sweep || b->levels || b->lines);
+  ComputeRequest modelOnly = exampleRequest(50);
+  modelOnly.parts = {};
+  const ResultPtr c = computeNow(modelOnly);
+  EXPECT_TRUE(c->model);
+  EXPECT_FALSE(c->sweep || c->spectrum);
 }
 
 TEST(ComputeWorker, InvalidSetupGivesAMessageNotACrash) {
@@ -76,7 +98,7 @@ TEST(Views, DataEqualsCoreOutput) {
   spec.points = 121;
   const SweepResult sweep = runSweep(model, project, spec);
   std::size_t curves = 0;
-  for (const LevelCurve& c : result->levels.curves) {
+  for (const LevelCurve& c : result->levels->curves) {
     const ClassSweep& cs = *std::find_if(sweep.classes.begin(), sweep.classes.end(), [&](auto& s) { return s.cls == c.cls; });
     const Eigen::MatrixXd& levels = c.manifold == Manifold::Ground ? cs.groundLevels : cs.excitedLevels;
     for (qsizetype k = 0; k < c.y.size(); ++k) ASSERT_DOUBLE_EQ(c.y[k], levels(k, c.level));
@@ -85,7 +107,7 @@ TEST(Views, DataEqualsCoreOutput) {
   EXPECT_EQ(curves, 4u * 8u);
   // Line map: each plotted point is one core line on the detuning axis.
   qsizetype points = 0;
-  for (const LinePointGroup& g : result->lines.groups) {
+  for (const LinePointGroup& g : result->lines->groups) {
     points += g.x.size();
     for (qsizetype i = 0; i < g.x.size(); ++i) {
       const auto k = static_cast<std::size_t>(std::lround((g.x[i] - spec.from) / (spec.to - spec.from) * (spec.points - 1)));
@@ -97,9 +119,9 @@ TEST(Views, DataEqualsCoreOutput) {
   }
   EXPECT_GT(points, 121 * 4 * 4);
   // Spectrum: the curve is the core spectrum.
-  ASSERT_EQ(result->spectrumPlot.y.size(), static_cast<qsizetype>(result->spectrum.y.size()));
-  for (std::size_t i = 0; i < result->spectrum.y.size(); ++i)
-    ASSERT_EQ(result->spectrumPlot.y[static_cast<qsizetype>(i)], result->spectrum.y[i]);
+  ASSERT_EQ(result->spectrum->plot.y.size(), static_cast<qsizetype>(result->spectrum->curve.y.size()));
+  for (std::size_t i = 0; i < result->spectrum->curve.y.size(); ++i)
+    ASSERT_EQ(result->spectrum->plot.y[static_cast<qsizetype>(i)], result->spectrum->curve.y[i]);
 }
 
 TEST(Import, PeakFileErrorNamesFileAndLine) {
@@ -123,9 +145,9 @@ TEST(Import, ExampleMeasurementsLoadAndPlace) {
   const ResultPtr result = computeNow(r);
   std::size_t peaks = 0;
   for (const auto& s : sets) peaks += s.peaks.size();
-  EXPECT_EQ(static_cast<std::size_t>(result->peaks.size()), peaks);
+  EXPECT_EQ(static_cast<std::size_t>(result->sweep->peaks.size()), peaks);
   const auto spectrum = readSpectrumCsv(FINESTRA_SOURCE_DIR "/examples/membrane-invented-spectrum.csv");
-  SpectrumPlotData data = result->spectrumPlot;
+  SpectrumPlotData data = result->spectrum->plot;
   addMeasuredSpectrum(data, spectrum, result->model->zplGHz());
   EXPECT_EQ(static_cast<std::size_t>(data.measuredX.size()), spectrum.position.size());
 }

@@ -39,10 +39,9 @@ ResultPtr computed(const ProjectDocument& doc) {
 
 /// Runs the fit from the view and waits for its result.
 FitOutcomePtr fitFromView(FitView& view) {
-  QSignalSpy finished(&view.runner(), &FitRunner::finished);
+  QSignalSpy finished(&view.runner(), &JobRunner::delivered);
   view.runFit();
   EXPECT_TRUE(finished.wait(kFitTimeoutMs));
-  view.runner().wait();
   QCoreApplication::processEvents();
   return view.lastOutcome();
 }
@@ -156,8 +155,8 @@ TEST(FitView, CancelStopsTheWorker) {
   doc.open(kFitDemo);
   doc.edit("many starts", Change::Fit, [](Project& p) { p.fit.starts = 400; });
   FitView view(ViewContext{&doc, nullptr});
-  QSignalSpy cancelled(&view.runner(), &FitRunner::cancelled);
-  QSignalSpy finished(&view.runner(), &FitRunner::finished);
+  QSignalSpy cancelled(&view.runner(), &JobRunner::cancelled);
+  QSignalSpy finished(&view.runner(), &JobRunner::delivered);
   view.runFit();
   EXPECT_TRUE(view.runner().busy());
   view.cancelFit();
@@ -174,10 +173,10 @@ TEST(FitView, LabelsOfTheFitAppearOnTheLinesView) {
   const ResultPtr result = computed(doc);
   ASSERT_TRUE(result->error.isEmpty()) << result->error.toStdString();
   lines.showResult(result);
-  EXPECT_EQ(lines.figure()->itemCount() - (result->currentX ? 1 : 0), 0);
+  EXPECT_EQ(lines.figure()->itemCount() - (result->sweep->currentX ? 1 : 0), 0);
   const QVector<PeakLabel> labels = labelsOfFit(fitProject(doc.project(), assignOnlyOptions()));
   int expected = 0;
-  for (const PeakMark& mark : result->peaks)
+  for (const PeakMark& mark : result->sweep->peaks)
     for (const PeakLabel& l : labels) expected += l.measurement == mark.measurement && l.peak == mark.peak ? 1 : 0;
   ASSERT_GT(expected, 0) << "no labelled peak lies on the default sweep of the demo";
   doc.setFitLabels(labels);
@@ -190,7 +189,7 @@ TEST(FitView, LabelsOfTheFitAppearOnTheLinesView) {
   const FitResult assignment = fitProject(doc.project(), assignOnlyOptions());
   const FittedPeak* pinned = nullptr;
   for (const FittedPeak& fp : assignment.peaks)
-    for (const PeakMark& mark : result->peaks)
+    for (const PeakMark& mark : result->sweep->peaks)
       if (!pinned && fp.line && fp.measurement == mark.measurement && fp.peak == mark.peak) pinned = &fp;
   ASSERT_TRUE(pinned);
   doc.edit("pin", Change::Measurements, [&](Project& p) {

@@ -85,7 +85,7 @@ QString strongestCorrelation(const FitResult& r) {
 }  // namespace
 
 FitView::FitView(const ViewContext& viewContext, QWidget* parent)
-    : ResultView(viewContext, parent), runner_(new FitRunner(this)) {
+    : ResultView(viewContext, parent), runner_(new JobRunner(tr("fit"), viewContext.jobs, this)) {
   startsBox_ = new QSpinBox(this);
   startsBox_->setRange(1, 1000);
   startsBox_->setToolTip(tr("Starting points of the fit: the first is the project as it is, the others are scattered\n"
@@ -190,20 +190,19 @@ FitView::FitView(const ViewContext& viewContext, QWidget* parent)
     if (!context().document || context().document->project().fit.starts == starts) return;
     context().document->edit(tr("Number of fit starts"), Change::Fit, [starts](Project& p) { p.fit.starts = starts; });
   });
-  connect(runner_, &FitRunner::progress, this, [this](double f) {
+  connect(runner_, &JobRunner::progress, this, [this](double f) {
     progress_->setRange(0, 100);
     progress_->setValue(static_cast<int>(100 * f));
   });
-  connect(runner_, &FitRunner::finished, this, &FitView::onFitFinished);
-  connect(runner_, &FitRunner::cancelled, this, [this] {
+  connect(runner_, &JobRunner::cancelled, this, [this] {
     message_ = tr("Fit cancelled; the previous result is kept.");
     refreshStatus();
   });
-  connect(runner_, &FitRunner::failed, this, [this](const QString& message) {
+  connect(runner_, &JobRunner::failed, this, [this](quint64, const QString& message) {
     message_ = message;
     refreshStatus();
   });
-  connect(runner_, &FitRunner::busyChanged, this, &FitView::setRunning);
+  connect(runner_, &JobRunner::busyChanged, this, &FitView::setRunning);
   if (viewContext.document) connect(viewContext.document, &ProjectDocument::changed, this, &FitView::onDocumentChanged);
   refreshAll();
 }
@@ -222,14 +221,13 @@ int FitView::parameterRow(const QString& name) const {
 void FitView::showResult(const ResultPtr& result) {
   result_ = result;
   // A plain assignment follows the model; a fit result stays until the next fit or a change of peaks.
-  const Project* p = project();
-  if ((!outcome_ || outcome_->assignOnly) && p && !p->measurements.empty() && !runner_->busy()) {
-    try {
-      setOutcome(runFitNow(*p, assignOnlyOptions(), true));
+  if ((!outcome_ || outcome_->assignOnly) && !runner_->busy()) {
+    if (result->assignment) {
+      setOutcome(std::make_shared<const FitOutcome>(FitOutcome{result->project, *result->assignment, true}));
       message_.clear();
-    } catch (const InputError& e) {
+    } else if (!result->assignmentError.isEmpty()) {
       outcome_.reset();
-      message_ = QString::fromStdString(e.what());
+      message_ = result->assignmentError;
     }
   }
   refreshAll();
@@ -247,7 +245,7 @@ void FitView::runFit() {
   options.starts = startsBox_->value();
   message_ = tr("Fitting %1 free parameters from %2 starts\u2026").arg(p->fit.free.size()).arg(startsBox_->value());
   progress_->setValue(0);
-  runner_->start(*p, options, false);
+  startRun(options, false);
   refreshStatus();
 }
 
@@ -256,11 +254,21 @@ void FitView::runAssignOnly() {
   if (!p) return;
   message_ = tr("Assigning peaks with the current parameters\u2026");
   progress_->setValue(0);
-  runner_->start(*p, assignOnlyOptions(), true);
+  startRun(assignOnlyOptions(), true);
   refreshStatus();
 }
 
 void FitView::cancelFit() { runner_->cancel(); }
+
+void FitView::startRun(FitOptions options, bool assignOnly) {
+  const Project* p = project();
+  if (!p) return;
+  runner_->start([this, snapshot = *p, options, assignOnly](const ProgressControl& control) mutable -> JobDelivery {
+    options.progress = control;  // the job's cancel flag and progress report
+    FitOutcomePtr outcome = runFitNow(snapshot, options, assignOnly);
+    return [this, outcome] { onFitFinished(outcome); };
+  });
+}
 
 void FitView::applyToProject() {
   if (!outcome_ || outcome_->assignOnly || !context().document) return;

@@ -2,15 +2,16 @@
 // "Assignment and fit" tab: the measured peaks with the line each one is matched to (outliers
 // marked), a residual plot grouped by measurement set, and a table of every fittable parameter
 // with a free/fixed box (the project's fit.free, edited through the document), its start value and
-// the fitted value with its standard error. "Fit" runs core's fitProject on a snapshot in a worker
-// thread (progress, cancel); "Assign only" matches peaks to lines with the current parameters;
-// "Apply to project" writes the fitted values as one undoable step. Whenever the shown result is a
-// plain assignment (or there is none yet) it is redone on every new model result, on the calling
-// thread, so the tab and its headless export always show the current assignment.
+// the fitted value with its standard error. "Fit" runs core's fitProject on a snapshot as a job of
+// the view's JobRunner (progress, cancel); "Assign only" matches peaks to lines with the current
+// parameters; "Apply to project" writes the fitted values as one undoable step. Whenever the shown
+// result is a plain assignment (or there is none yet) it follows the model: the view asks for
+// Part::Assignment, which the model worker computes with every result.
 #include <QString>
 
 #include "ui/document.h"
 #include "ui/fit/fit_runner.h"
+#include "ui/jobs/job_runner.h"
 #include "ui/result_view.h"
 
 class QComboBox;
@@ -38,7 +39,7 @@ public:
   void cancelFit();
   void applyToProject();
 
-  FitRunner& runner() { return *runner_; }
+  JobRunner& runner() { return *runner_; }
   FitOutcomePtr lastOutcome() const { return outcome_; }
   QTableWidget* peakTable() const { return peakTable_; }
   QTableWidget* parameterTable() const { return parameterTable_; }
@@ -51,6 +52,7 @@ private:
   const Project* project() const;
   void onDocumentChanged(Changes what);
   void onParameterItemChanged(QTableWidgetItem* item);
+  void startRun(FitOptions options, bool assignOnly);
   void onFitFinished(const FitOutcomePtr& outcome);
   void setOutcome(FitOutcomePtr outcome);
   void refreshAll();
@@ -60,7 +62,7 @@ private:
   void redrawResiduals();
   void setRunning(bool running);
 
-  FitRunner* runner_ = nullptr;
+  JobRunner* runner_ = nullptr;
   QSpinBox* startsBox_ = nullptr;
   QPushButton* fitButton_ = nullptr;
   QPushButton* assignButton_ = nullptr;

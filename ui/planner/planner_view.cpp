@@ -10,7 +10,6 @@
 #include <QPushButton>
 #include <QSpinBox>
 #include <QSplitter>
-#include <QThread>
 #include <QVBoxLayout>
 #include <cmath>
 #include <numbers>
@@ -37,7 +36,8 @@ Vec3 driveChoice(int index) {
 
 }  // namespace
 
-PlannerView::PlannerView(const ViewContext& context, QWidget* parent) : ResultView(context, parent) {
+PlannerView::PlannerView(const ViewContext& context, QWidget* parent)
+    : ResultView(context, parent), runner_(new JobRunner(tr("planner map"), context.jobs, this)) {
   figureBox_ = new QComboBox(this);
   for (const FigureInfo& info : figureTable()) {
     figureBox_->addItem(QString::fromUtf8(info.key.data(), static_cast<qsizetype>(info.key.size())));
@@ -138,12 +138,13 @@ PlannerView::PlannerView(const ViewContext& context, QWidget* parent) : ResultVi
   connect(classBox_, &QSpinBox::valueChanged, this, &PlannerView::redraw);
   connect(minEdit_, &QLineEdit::editingFinished, this, &PlannerView::redraw);
   connect(maxEdit_, &QLineEdit::editingFinished, this, &PlannerView::redraw);
-}
-
-PlannerView::~PlannerView() {
-  // The worker posts to this object: stop it and wait before the object goes away.
-  if (cancel_) cancel_->store(true);
-  if (worker_) worker_->wait();
+  connect(runner_, &JobRunner::progress, this, [this](double f) { progress_->setValue(static_cast<int>(100 * f)); });
+  connect(runner_, &JobRunner::cancelled, this, [this] { status_->setText(tr("Map cancelled.")); });
+  connect(runner_, &JobRunner::failed, this, [this](quint64, const QString& message) { status_->setText(message); });
+  connect(runner_, &JobRunner::busyChanged, this, [this](bool busy) {
+    computeButton_->setEnabled(!busy);
+    cancelButton_->setEnabled(busy);
+  });
 }
 
 void PlannerView::showResult(const ResultPtr& result) {
@@ -159,7 +160,7 @@ void PlannerView::showResult(const ResultPtr& result) {
 
 void PlannerView::showEvent(QShowEvent* event) {
   ResultView::showEvent(event);
-  if (!maps_ && !worker_ && result_ && result_->model) startMap();  // a first map without a click
+  if (!maps_ && !runner_->busy() && result_ && result_->model) startMap();  // a first map without a click
 }
 
 Vec3 PlannerView::trueFieldLab() const {
@@ -172,8 +173,6 @@ void PlannerView::startMap() {
     status_->setText(result_ ? result_->error : tr("No model yet."));
     return;
   }
-  cancelMap();
-  if (worker_) worker_->wait();
   PlannerSettings settings;
   settings.classes = result_->project.classes;
   if (std::find(settings.classes.begin(), settings.classes.end(), classBox_->value()) == settings.classes.end())
@@ -186,53 +185,19 @@ void PlannerView::startMap() {
   Vec3 profileDirection = trueFieldLab();
   if (profileDirection.norm() == 0) profileDirection = Vec3::UnitZ();
   const double profileMax = std::max(2.0 * settings.magnitudeT, 1.0);
-
-  cancel_ = std::make_shared<std::atomic<bool>>(false);
-  const quint64 generation = ++generation_;
-  const std::shared_ptr<const CentreModel> model = result_->model;
-  const std::shared_ptr<std::atomic<bool>> cancel = cancel_;
-  worker_ = QThread::create([this, model, settings, grid, profileDirection, profileMax, cancel, generation] {
-    ProgressControl control;
-    control.cancel = cancel.get();
-    control.report = [this, generation](double fraction) {
-      QMetaObject::invokeMethod(this, [this, generation, fraction] {
-        if (generation == generation_) progress_->setValue(static_cast<int>(100 * fraction));
-      }, Qt::QueuedConnection);
-    };
-    try {
-      auto maps = std::make_shared<PlannerMaps>();
-      maps->settings = settings;
-      maps->map = computeFigureMap(*model, settings, grid, control);
-      maps->profile = magnitudeProfile(*model, settings, profileDirection, profileMax, 121);
-      QMetaObject::invokeMethod(this, [this, generation, maps] {
-        if (generation == generation_) onMapReady(maps);
-      }, Qt::QueuedConnection);
-    } catch (const Cancelled&) {
-      QMetaObject::invokeMethod(this, [this, generation] {
-        if (generation == generation_) status_->setText(tr("Map cancelled."));
-      }, Qt::QueuedConnection);
-    } catch (const std::exception& e) {
-      const QString message = QString::fromStdString(e.what());
-      QMetaObject::invokeMethod(this, [this, generation, message] {
-        if (generation == generation_) status_->setText(message);
-      }, Qt::QueuedConnection);
-    }
-  });
-  connect(worker_, &QThread::finished, worker_, &QObject::deleteLater);
-  connect(worker_, &QThread::finished, this, [this] {
-    computeButton_->setEnabled(true);
-    cancelButton_->setEnabled(false);
-  });
-  computeButton_->setEnabled(false);
-  cancelButton_->setEnabled(true);
   progress_->setValue(0);
   status_->setText(tr("Computing %1 × %2 directions…").arg(grid.polarCount).arg(grid.azimuthCount));
-  worker_->start();
+  runner_->start([this, model = result_->model, settings, grid, profileDirection,
+                  profileMax](const ProgressControl& control) -> JobDelivery {
+    auto maps = std::make_shared<PlannerMaps>();
+    maps->settings = settings;
+    maps->map = computeFigureMap(*model, settings, grid, control);
+    maps->profile = magnitudeProfile(*model, settings, profileDirection, profileMax, 121);
+    return [this, maps] { onMapReady(maps); };
+  });
 }
 
-void PlannerView::cancelMap() {
-  if (cancel_) cancel_->store(true);
-}
+void PlannerView::cancelMap() { runner_->cancel(); }
 
 void PlannerView::onMapReady(std::shared_ptr<const PlannerMaps> maps) {
   maps_ = std::move(maps);

@@ -2,14 +2,13 @@
 // Magnet planner tab: a map of one figure of merit of one class over every field direction
 // (polar–azimuth, or the equal-area cylindrical projection x = azimuth, y = cos polar), the region
 // where the figure lies in a wanted range outlined, and the figure along |B| for the project's
-// field direction. The map is computed by core (computeFigureMap) on a worker QThread with progress
-// and cancel; a click on the map moves the project's field there through the document (undoable).
-#include <QPointer>
-#include <atomic>
+// field direction. The map is computed by core (computeFigureMap) as a job of the view's JobRunner
+// (progress, cancel, a newer map supersedes an older one); a click on the map moves the project's field there through the document (undoable).
 #include <memory>
 #include <optional>
 
 #include "core/planner/planner.h"
+#include "ui/jobs/job_runner.h"
 #include "ui/result_view.h"
 
 class QComboBox;
@@ -19,7 +18,6 @@ class QLineEdit;
 class QProgressBar;
 class QPushButton;
 class QSpinBox;
-class QThread;
 class QCPColorMap;
 class QCPGraph;
 
@@ -36,10 +34,10 @@ class PlannerView : public ResultView {
   Q_OBJECT
 public:
   explicit PlannerView(const ViewContext& context, QWidget* parent = nullptr);
-  ~PlannerView() override;
   void showResult(const ResultPtr& result) override;
   QCustomPlot* figure() override { return mapPlot_; }
   Table dataTable() const override;
+  JobRunner& runner() { return *runner_; }
 
 protected:
   void showEvent(QShowEvent* event) override;
@@ -75,9 +73,7 @@ private:
 
   ResultPtr result_;
   std::shared_ptr<const PlannerMaps> maps_;
-  QPointer<QThread> worker_;
-  std::shared_ptr<std::atomic<bool>> cancel_;
-  quint64 generation_ = 0;
+  JobRunner* runner_ = nullptr;
 };
 
 }  // namespace finestra::ui

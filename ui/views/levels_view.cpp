@@ -30,14 +30,14 @@ LevelsView::LevelsView(const ViewContext& context, QWidget* parent)
 void LevelsView::rebuild() {
   plot_->clearGraphs();
   plot_->clearItems();
-  if (!result_ || !result_->error.isEmpty()) {
+  if (!result_ || !result_->levels) {
     plot_->replot();
     return;
   }
-  const QString xLabel = QString::fromStdString(sweepAxisLabel(result_->sweep.kind));
+  const QString xLabel = QString::fromStdString(sweepAxisLabel(result_->sweep->spec.kind));
   excitedRect_->axis(QCPAxis::atBottom)->setLabel(QString());
   groundRect_->axis(QCPAxis::atBottom)->setLabel(xLabel);
-  for (const LevelCurve& c : result_->levels.curves) {
+  for (const LevelCurve& c : result_->levels->curves) {
     if (!filter_->visible(c.cls)) continue;
     QCPAxisRect* rect = c.manifold == Manifold::Excited ? excitedRect_ : groundRect_;
     QCPGraph* g = plot_->addGraph(rect->axis(QCPAxis::atBottom), rect->axis(QCPAxis::atLeft));
@@ -60,13 +60,13 @@ void LevelsView::rebuild() {
       const double pad = std::max(1.0, 0.06 * yr.size());
       r->axis(QCPAxis::atLeft)->setRange(yr.lower - pad, yr.upper + pad);
     }
-    r->axis(QCPAxis::atBottom)->setRange(result_->sweepResult.x.front(), result_->sweepResult.x.back());
-    if (result_->currentX) {
+    r->axis(QCPAxis::atBottom)->setRange(result_->sweep->result.x.front(), result_->sweep->result.x.back());
+    if (result_->sweep->currentX) {
       auto* marker = new QCPItemStraightLine(plot_);
       marker->setClipAxisRect(r);
       for (QCPItemPosition* p : {marker->point1, marker->point2}) p->setAxes(r->axis(QCPAxis::atBottom), r->axis(QCPAxis::atLeft));
-      marker->point1->setCoords(*result_->currentX, 0);
-      marker->point2->setCoords(*result_->currentX, 1);
+      marker->point1->setCoords(*result_->sweep->currentX, 0);
+      marker->point2->setCoords(*result_->sweep->currentX, 1);
       marker->setPen(QPen(palette().marker, 1.2, Qt::DashLine));
     }
   }
@@ -77,17 +77,17 @@ void LevelsView::rebuild() {
   title->position->setCoords(0.0, 0.0);
   title->setPositionAlignment(Qt::AlignLeft | Qt::AlignBottom);
   title->setText(tr("sweep: %1   colour = tracked level, line style = class   dashed marker = current field")
-                     .arg(QString::fromStdString(result_->sweep.name)));
+                     .arg(QString::fromStdString(result_->sweep->spec.name)));
   title->setColor(QColor(90, 90, 90));
   plot_->replot();
 }
 
 void LevelsView::onMouseMove(QMouseEvent* event) {
-  if (!result_ || result_->sweepResult.x.empty()) return;
+  if (!result_ || !result_->levels || result_->sweep->result.x.empty()) return;
   const QPointF pos = event->position();
   double best = 12.0;  // pixels
   QString text;
-  for (const LevelCurve& c : result_->levels.curves) {
+  for (const LevelCurve& c : result_->levels->curves) {
     if (!filter_->visible(c.cls)) continue;
     QCPAxisRect* rect = c.manifold == Manifold::Excited ? excitedRect_ : groundRect_;
     if (!rect->rect().contains(pos.toPoint())) continue;
@@ -111,14 +111,14 @@ void LevelsView::onMouseMove(QMouseEvent* event) {
 
 Table LevelsView::dataTable() const {
   Table t;
-  if (!result_ || result_->error.size()) return t;
-  t.headers.push_back(sweepAxisLabel(result_->sweep.kind));
-  for (const LevelCurve& c : result_->levels.curves)
+  if (!result_ || !result_->levels) return t;
+  t.headers.push_back(sweepAxisLabel(result_->sweep->spec.kind));
+  for (const LevelCurve& c : result_->levels->curves)
     t.headers.push_back("class " + std::to_string(c.cls) + (c.manifold == Manifold::Excited ? " excited " : " ground ") +
                         std::to_string(c.level) + " (GHz)");
-  for (std::size_t k = 0; k < result_->sweepResult.x.size(); ++k) {
-    std::vector<std::string> row{exact(result_->sweepResult.x[k])};
-    for (const LevelCurve& c : result_->levels.curves) row.push_back(exact(c.y[static_cast<qsizetype>(k)]));
+  for (std::size_t k = 0; k < result_->sweep->result.x.size(); ++k) {
+    std::vector<std::string> row{exact(result_->sweep->result.x[k])};
+    for (const LevelCurve& c : result_->levels->curves) row.push_back(exact(c.y[static_cast<qsizetype>(k)]));
     t.rows.push_back(std::move(row));
   }
   return t;

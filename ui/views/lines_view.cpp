@@ -34,16 +34,16 @@ void LinesView::rebuild() {
   plot_->clearGraphs();
   plot_->clearItems();
   plot_->clearPlottables();
-  if (!result_ || !result_->error.isEmpty()) {
+  if (!result_ || !result_->lines) {
     plot_->replot();
     return;
   }
-  plot_->xAxis->setLabel(QString::fromStdString(sweepAxisLabel(result_->sweep.kind)));
-  plot_->yAxis->setLabel(QString::fromStdString(spectralUnitLabel(result_->lines.unit)));
+  plot_->xAxis->setLabel(QString::fromStdString(sweepAxisLabel(result_->sweep->spec.kind)));
+  plot_->yAxis->setLabel(QString::fromStdString(spectralUnitLabel(result_->lines->unit)));
   std::array<bool, 4> legendDone{};
   // Weak bins first so strong points are drawn on top.
   QVector<const LinePointGroup*> ordered;
-  for (const LinePointGroup& g : result_->lines.groups) ordered.push_back(&g);
+  for (const LinePointGroup& g : result_->lines->groups) ordered.push_back(&g);
   std::stable_sort(ordered.begin(), ordered.end(), [](auto* a, auto* b) { return a->bin > b->bin; });
   for (const LinePointGroup* g : ordered) {
     if (!filter_->visible(g->cls)) continue;
@@ -75,12 +75,12 @@ void LinesView::rebuild() {
                                   : QCPScatterStyle(QCPScatterStyle::ssCircle, QPen(Qt::darkGray, 1.2), Qt::NoBrush, 7.5));
     key->setName(parallel ? tr("dipole \u2225 defect axis") : tr("dipole \u22a5 defect axis"));
   }
-  if (!result_->peaks.isEmpty()) {
+  if (!result_->sweep->peaks.isEmpty()) {
     QCPGraph* peaks = plot_->addGraph();
     peaks->setLineStyle(QCPGraph::lsNone);
     peaks->setScatterStyle(QCPScatterStyle(QCPScatterStyle::ssCross, QPen(palette().measured, 1.3), Qt::NoBrush, 7));
     QVector<double> x, y, e;
-    for (const PeakMark& p : result_->peaks) {
+    for (const PeakMark& p : result_->sweep->peaks) {
       x << p.x;
       y << p.y;
       e << p.yError;
@@ -97,10 +97,10 @@ void LinesView::rebuild() {
   addPeakLabels();
   const QCPRange y = plot_->yAxis->range();
   plot_->yAxis->setRange(y.lower - 0.05 * y.size(), y.upper + 0.05 * y.size());
-  if (result_->currentX) {
+  if (result_->sweep->currentX) {
     auto* marker = new QCPItemStraightLine(plot_);
-    marker->point1->setCoords(*result_->currentX, 0);
-    marker->point2->setCoords(*result_->currentX, 1);
+    marker->point1->setCoords(*result_->sweep->currentX, 0);
+    marker->point2->setCoords(*result_->sweep->currentX, 1);
     marker->setPen(QPen(palette().marker, 1.2, Qt::DashLine));
   }
   plot_->replot();
@@ -113,7 +113,7 @@ void LinesView::addPeakLabels() {
   if (context().document)
     for (const PeakLabel& l : context().document->fitLabels()) labels[{l.measurement, l.peak}] = l.text;
   if (labels.isEmpty()) return;
-  for (const PeakMark& p : result_->peaks) {
+  for (const PeakMark& p : result_->sweep->peaks) {
     const auto it = labels.constFind({p.measurement, p.peak});
     if (it == labels.constEnd()) continue;
     auto* text = new QCPItemText(plot_);
@@ -132,8 +132,8 @@ void LinesView::addPeakLabels() {
 qsizetype LinesView::peakAt(const QPointF& pixel, double radius) const {
   qsizetype best = -1;
   double bestDistance = radius;
-  for (qsizetype i = 0; i < result_->peaks.size(); ++i) {
-    const PeakMark& p = result_->peaks[i];
+  for (qsizetype i = 0; i < result_->sweep->peaks.size(); ++i) {
+    const PeakMark& p = result_->sweep->peaks[i];
     const double dx = plot_->xAxis->coordToPixel(p.x) - pixel.x();
     const double dy = plot_->yAxis->coordToPixel(p.y) - pixel.y();
     const double d = std::hypot(dx, dy);
@@ -146,10 +146,10 @@ qsizetype LinesView::peakAt(const QPointF& pixel, double radius) const {
 }
 
 void LinesView::onMouseMove(QMouseEvent* event) {
-  if (!result_ || !result_->model || result_->sweepResult.x.empty()) return;
+  if (!result_ || !result_->lines || result_->sweep->result.x.empty()) return;
   const QPointF pos = event->position();
   if (const qsizetype p = peakAt(pos, 8); p >= 0) {
-    const PeakMark& mark = result_->peaks[p];
+    const PeakMark& mark = result_->sweep->peaks[p];
     const MeasurementSet& m = result_->project.measurements[static_cast<std::size_t>(mark.measurement)];
     QToolTip::showText(event->globalPosition().toPoint(),
                        tr("measured: %1, peak %2\n%3 \u00b1 %4\nclick to list the nearest predicted lines")
@@ -160,7 +160,7 @@ void LinesView::onMouseMove(QMouseEvent* event) {
                        plot_);
     return;
   }
-  const auto& xs = result_->sweepResult.x;
+  const auto& xs = result_->sweep->result.x;
   const double x = plot_->xAxis->pixelToCoord(pos.x());
   const auto it = std::lower_bound(xs.begin(), xs.end(), x);
   std::size_t k = static_cast<std::size_t>(std::clamp<std::ptrdiff_t>(it - xs.begin(), 0, static_cast<std::ptrdiff_t>(xs.size()) - 1));
@@ -173,11 +173,11 @@ void LinesView::onMouseMove(QMouseEvent* event) {
   double best = 8.0;
   const OpticalLine* bestLine = nullptr;
   int bestClass = 0;
-  for (const ClassSweep& c : result_->sweepResult.classes) {
+  for (const ClassSweep& c : result_->sweep->result.classes) {
     if (!filter_->visible(c.cls)) continue;
     for (const OpticalLine& l : c.lines[k]) {
-      if (l.intensity < kIntensityBinFloors.back() * result_->lines.maxIntensity) continue;
-      const double py = plot_->yAxis->coordToPixel(fromAbsoluteGHz(l.frequencyGHz, result_->lines.unit, zpl));
+      if (l.intensity < kIntensityBinFloors.back() * result_->lines->maxIntensity) continue;
+      const double py = plot_->yAxis->coordToPixel(fromAbsoluteGHz(l.frequencyGHz, result_->lines->unit, zpl));
       if (std::abs(py - pos.y()) < best) {
         best = std::abs(py - pos.y());
         bestLine = &l;
@@ -195,14 +195,14 @@ void LinesView::onMouseMove(QMouseEvent* event) {
 }
 
 void LinesView::onMousePress(QMouseEvent* event) {
-  if (!result_ || event->button() != Qt::LeftButton) return;
+  if (!result_ || !result_->lines || event->button() != Qt::LeftButton) return;
   if (const qsizetype p = peakAt(event->position(), 8); p >= 0)
-    Q_EMIT peakClicked(result_->peaks[p].measurement, result_->peaks[p].peak);
+    Q_EMIT peakClicked(result_->sweep->peaks[p].measurement, result_->sweep->peaks[p].peak);
 }
 
 Table LinesView::dataTable() const {
-  if (!result_ || !result_->error.isEmpty()) return {};
-  return sweepLinesTable(result_->sweep, result_->sweepResult);
+  if (!result_ || !result_->lines) return {};
+  return sweepLinesTable(result_->sweep->spec, result_->sweep->result);
 }
 
 }  // namespace finestra::ui

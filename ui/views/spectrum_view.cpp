@@ -22,7 +22,7 @@ SpectrumView::SpectrumView(const ViewContext& context, QWidget* parent)
 }
 
 SpectrumPlotData SpectrumView::plotData() const {
-  SpectrumPlotData data = result_->spectrumPlot;
+  SpectrumPlotData data = result_->spectrum->plot;
   const ProjectDocument* document = context().document;
   if (document && document->measuredSpectrum() && result_->model)
     addMeasuredSpectrum(data, *document->measuredSpectrum(), result_->model->zplGHz());
@@ -32,7 +32,7 @@ SpectrumPlotData SpectrumView::plotData() const {
 void SpectrumView::rebuild() {
   plot_->clearPlottables();
   plot_->clearItems();
-  if (!result_ || !result_->error.isEmpty()) {
+  if (!result_ || !result_->spectrum) {
     plot_->replot();
     return;
   }
@@ -86,11 +86,11 @@ void SpectrumView::rebuild() {
 }
 
 void SpectrumView::onMouseMove(QMouseEvent* event) {
-  if (!result_ || !result_->model) return;
+  if (!result_ || !result_->spectrum) return;
   const QPointF pos = event->position();
   double best = 6.0;
   const Stick* found = nullptr;
-  for (const Stick& s : result_->spectrumPlot.sticks) {
+  for (const Stick& s : result_->spectrum->plot.sticks) {
     if (!filter_->visible(s.cls)) continue;
     const double d = std::abs(plot_->xAxis->coordToPixel(s.x) - pos.x());
     if (d < best) {
@@ -109,7 +109,7 @@ void SpectrumView::onMouseMove(QMouseEvent* event) {
 
 Table SpectrumView::dataTable() const {
   Table t;
-  if (!result_ || !result_->error.isEmpty()) return t;
+  if (!result_ || !result_->spectrum) return t;
   const SpectrumPlotData data = plotData();
   t.headers = {spectralUnitLabel(data.unit), "simulated"};
   for (qsizetype i = 0; i < data.x.size(); ++i) t.rows.push_back({exact(data.x[i]), exact(data.y[i])});
