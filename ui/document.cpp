@@ -34,16 +34,33 @@ private:
 
 }  // namespace
 
+Changes changesBetween(const Project& before, const Project& after) {
+  Changes what;
+  if (!(before.centre == after.centre)) what |= Change::Centre;
+  if (!(before.sample == after.sample)) what |= Change::Sample;
+  if (!(before.field == after.field)) what |= Change::Field;
+  if (!(before.magnet == after.magnet)) what |= Change::Magnet;
+  if (!(before.strain == after.strain)) what |= Change::Strain;
+  if (!(before.conditions == after.conditions)) what |= Change::Conditions;
+  if (before.classes != after.classes) what |= Change::Classes;
+  if (before.sweeps != after.sweeps) what |= Change::Sweeps;
+  if (before.measurements != after.measurements) what |= Change::Measurements;
+  if (!(before.fit == after.fit)) what |= Change::Fit;
+  if (before.measuredSpectrum != after.measuredSpectrum) what |= Change::MeasuredSpectrum;
+  if (before.description != after.description) what |= Change::Description;
+  return what;
+}
+
 ProjectDocument::ProjectDocument(QObject* parent) : QObject(parent) {
   qRegisterMetaType<Changes>("finestra::ui::Changes");
   connect(&undoStack_, &QUndoStack::cleanChanged, this, [this] { Q_EMIT changed(Change::File); });
 }
 
-void ProjectDocument::edit(const QString& text, Changes what, const std::function<void(Project&)>& mutate,
-                           const QString& mergeKey) {
+void ProjectDocument::edit(const QString& text, const std::function<void(Project&)>& mutate, const QString& mergeKey) {
   Project after = project_;
   mutate(after);
-  if (projectToJson(after) == projectToJson(project_)) return;
+  const Changes what = changesBetween(project_, after);
+  if (!what) return;
   // QUndoCommand ids must be non-negative to merge; -1 means "never merge".
   const int mergeId = mergeKey.isEmpty() ? -1 : static_cast<int>(qHash(mergeKey) & 0x7fffffffu);
   undoStack_.push(new ProjectEditCommand(*this, text, what, project_, std::move(after), mergeId,
@@ -87,7 +104,7 @@ void ProjectDocument::saveAs(const QString& path) {
 
 void ProjectDocument::setMeasuredSpectrum(std::optional<MeasuredSpectrum> spectrum) {
   const QString text = spectrum ? tr("Import measured spectrum") : tr("Remove measured spectrum");
-  edit(text, Change::MeasuredSpectrum, [&](Project& p) { p.measuredSpectrum = std::move(spectrum); });
+  edit(text, [&](Project& p) { p.measuredSpectrum = std::move(spectrum); });
 }
 
 void ProjectDocument::setFitLabels(QVector<PeakLabel> labels) {

@@ -2,7 +2,8 @@
 // The document: the one place a project is edited. Every edit is a QUndoCommand holding the
 // project before and after (projects are small plain data), so undo/redo is exact. Edits made
 // during a slider drag share a merge token and collapse into one undo step. Listeners get one
-// coarse changed(Changes) signal saying which parts moved.
+// changed(Changes) signal saying which parts moved; the document finds them itself by comparing the
+// parts of the project before and after the edit (no serialisation, no flags from the caller).
 #include <QObject>
 #include <QString>
 #include <QUndoStack>
@@ -27,14 +28,19 @@ enum class Change : unsigned {
   MeasuredSpectrum = 1u << 8,
   File = 1u << 9,  ///< path or modified state
   Fit = 1u << 10,  ///< fit settings (fit.free, fit.starts) or the session's fit labels
-  Everything = 0x7FFu,
+  Magnet = 1u << 11,       ///< the magnet calibration (true field from a magnet setting)
+  Description = 1u << 12,  ///< the project's free text
+  Everything = 0x1FFFu,
 };
 Q_DECLARE_FLAGS(Changes, Change)
 Q_DECLARE_OPERATORS_FOR_FLAGS(Changes)
 
 /// Changes that alter computed results (everything except file state and measured overlays).
 inline constexpr Changes kPhysicsChanges = Changes(Change::Centre) | Change::Sample | Change::Field | Change::Strain |
-                                           Change::Conditions | Change::Classes | Change::Sweeps;
+                                           Change::Conditions | Change::Classes | Change::Sweeps | Change::Magnet;
+
+/// The parts that differ between two projects (each part compared with its operator==).
+Changes changesBetween(const Project& before, const Project& after);
 
 /// The line a measured peak was matched to by the last fit or assignment of this session.
 struct PeakLabel {
@@ -54,11 +60,11 @@ public:
   /// Incremented on every state change (edits, undo, redo, load): lets autosave skip idle time.
   quint64 revision() const { return revision_; }
 
-  /// Applies `mutate` to a copy of the project and pushes it as one undo step named `text`.
-  /// A no-op edit (same file content) pushes nothing. With a non-empty `mergeKey`, consecutive
-  /// edits of the same key inside one drag (beginDrag/endDrag) merge into one step.
-  void edit(const QString& text, Changes what, const std::function<void(Project&)>& mutate,
-            const QString& mergeKey = {});
+  /// Applies `mutate` to a copy of the project and pushes it as one undo step named `text`; the
+  /// listeners learn which parts changed. An edit that changes no part pushes nothing. With a
+  /// non-empty `mergeKey`, consecutive edits of the same key inside one drag (beginDrag/endDrag)
+  /// merge into one step.
+  void edit(const QString& text, const std::function<void(Project&)>& mutate, const QString& mergeKey = {});
   void beginDrag();
   void endDrag();
   quint64 dragToken() const { return dragToken_; }

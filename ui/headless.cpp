@@ -21,8 +21,7 @@ void runHeadlessExport(const HeadlessExport& job) {
   document.open(job.project);
   if (!job.peaksCsv.isEmpty()) {
     const auto sets = readPeakCsv(job.peaksCsv.toStdString());
-    document.edit("Import peaks", Change::Measurements,
-                  [&](Project& p) { p.measurements.insert(p.measurements.end(), sets.begin(), sets.end()); });
+    document.edit("Import peaks", [&](Project& p) { p.measurements.insert(p.measurements.end(), sets.begin(), sets.end()); });
   }
   if (!job.spectrumCsv.isEmpty()) document.setMeasuredSpectrum(readSpectrumCsv(job.spectrumCsv.toStdString()));
   ComputeRequest request;

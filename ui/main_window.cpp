@@ -19,7 +19,7 @@
 #include "ui/dialogs.h"
 #include "ui/figure_export.h"
 #include "ui/log_panel.h"
-#include "ui/setup_panel.h"
+#include "ui/setup/setup_panel.h"
 
 namespace finestra::ui {
 namespace {
@@ -233,7 +233,7 @@ bool MainWindow::importPeaks(const QString& path) {
   }
   std::size_t count = 0;
   for (const auto& s : sets) count += s.peaks.size();
-  document_->edit(tr("Import peaks"), Change::Measurements, [&](Project& p) {
+  document_->edit(tr("Import peaks"), [&](Project& p) {
     p.measurements.insert(p.measurements.end(), sets.begin(), sets.end());
   });
   spdlog::info("imported {} peaks in {} measurements from {}", count, sets.size(), path.toStdString());

@@ -21,9 +21,9 @@ TEST(Document, FiftyEditsUndoneAndRedone) {
   QSignalSpy changed(&doc, &ProjectDocument::changed);
   for (int i = 0; i < 50; ++i) {
     switch (i % 3) {
-      case 0: doc.edit("field", Change::Field, [i](Project& p) { p.field.magnitudeT = 0.01 * (i + 1); }); break;
-      case 1: doc.edit("temperature", Change::Conditions, [i](Project& p) { p.conditions.temperatureK = 2.0 + i; }); break;
-      default: doc.edit("lambda", Change::Centre, [i](Project& p) { p.centre.overrides["lambda_g_GHz"] = 40.0 + i; }); break;
+      case 0: doc.edit("field", [i](Project& p) { p.field.magnitudeT = 0.01 * (i + 1); }); break;
+      case 1: doc.edit("temperature", [i](Project& p) { p.conditions.temperatureK = 2.0 + i; }); break;
+      default: doc.edit("lambda", [i](Project& p) { p.centre.overrides["lambda_g_GHz"] = 40.0 + i; }); break;
     }
   }
   EXPECT_EQ(doc.undoStack().count(), 50);
@@ -46,15 +46,15 @@ TEST(Document, DragMergesIntoOneStepAndNoOpPushesNothing) {
   ProjectDocument doc;
   doc.beginDrag();
   for (int i = 1; i <= 20; ++i)
-    doc.edit("field", Change::Field, [i](Project& p) { p.field.magnitudeT = 0.1 * i; }, "field.magnitude");
+    doc.edit("field", [i](Project& p) { p.field.magnitudeT = 0.1 * i; }, "field.magnitude");
   doc.endDrag();
   EXPECT_EQ(doc.undoStack().count(), 1);
   EXPECT_DOUBLE_EQ(doc.project().field.magnitudeT, 2.0);
   // Outside a drag the same key does not merge.
-  doc.edit("field", Change::Field, [](Project& p) { p.field.magnitudeT = 2.5; }, "field.magnitude");
-  doc.edit("field", Change::Field, [](Project& p) { p.field.magnitudeT = 2.6; }, "field.magnitude");
+  doc.edit("field", [](Project& p) { p.field.magnitudeT = 2.5; }, "field.magnitude");
+  doc.edit("field", [](Project& p) { p.field.magnitudeT = 2.6; }, "field.magnitude");
   EXPECT_EQ(doc.undoStack().count(), 3);
-  doc.edit("same", Change::Field, [](Project& p) { p.field.magnitudeT = 2.6; });
+  doc.edit("same", [](Project& p) { p.field.magnitudeT = 2.6; });
   EXPECT_EQ(doc.undoStack().count(), 3);
   doc.undoStack().undo();
   doc.undoStack().undo();
@@ -66,8 +66,8 @@ TEST(Document, SaveLoadRoundTrip) {
   QTemporaryDir dir;
   ProjectDocument doc;
   doc.open(kExample);
-  doc.edit("strain", Change::Strain, [](Project& p) { p.strain.crystal(0, 1) = p.strain.crystal(1, 0) = 4e-6; });
-  doc.edit("isotope", Change::Centre, [](Project& p) { p.centre.isotope = "29Si"; });
+  doc.edit("strain", [](Project& p) { p.strain.crystal(0, 1) = p.strain.crystal(1, 0) = 4e-6; });
+  doc.edit("isotope", [](Project& p) { p.centre.isotope = "29Si"; });
   const QString path = dir.filePath("saved.json");
   doc.saveAs(path);
   EXPECT_FALSE(doc.isModified());
@@ -106,7 +106,7 @@ TEST(Document, OpenErrorKeepsCurrentDocument) {
   writeFileAtomically(bad.toStdString(), "{ \"format\": \"finestra-project\", \"version\": 1, \"field\": { \"magnitude_T\": \"x\" } }");
   ProjectDocument doc;
   doc.open(kExample);
-  doc.edit("t", Change::Conditions, [](Project& p) { p.conditions.temperatureK = 9; });
+  doc.edit("t", [](Project& p) { p.conditions.temperatureK = 9; });
   const std::string before = projectToJson(doc.project());
   try {
     doc.open(bad);
@@ -124,7 +124,7 @@ TEST(Autosave, CopyOfAnUncleanSessionIsOffered) {
   {
     ProjectDocument doc;
     doc.open(kExample);
-    doc.edit("t", Change::Conditions, [](Project& p) { p.conditions.temperatureK = 7.5; });
+    doc.edit("t", [](Project& p) { p.conditions.temperatureK = 7.5; });
     edited = projectToJson(doc.project());
     Autosaver saver(doc, dir.path(), 60000);
     saver.saveNow();
@@ -141,7 +141,7 @@ TEST(Autosave, CopyOfAnUncleanSessionIsOffered) {
 TEST(Autosave, CleanExitLeavesNothing) {
   QTemporaryDir dir;
   ProjectDocument doc;
-  doc.edit("t", Change::Conditions, [](Project& p) { p.conditions.temperatureK = 7.5; });
+  doc.edit("t", [](Project& p) { p.conditions.temperatureK = 7.5; });
   {
     Autosaver saver(doc, dir.path(), 60000);
     saver.saveNow();

@@ -153,7 +153,7 @@ TEST(FitView, FreeFixedBoxesEditFitFreeUndoably) {
 TEST(FitView, CancelStopsTheWorker) {
   ProjectDocument doc;
   doc.open(kFitDemo);
-  doc.edit("many starts", Change::Fit, [](Project& p) { p.fit.starts = 400; });
+  doc.edit("many starts", [](Project& p) { p.fit.starts = 400; });
   FitView view(ViewContext{&doc, nullptr});
   QSignalSpy cancelled(&view.runner(), &JobRunner::cancelled);
   QSignalSpy finished(&view.runner(), &JobRunner::delivered);
@@ -192,7 +192,7 @@ TEST(FitView, LabelsOfTheFitAppearOnTheLinesView) {
     for (const PeakMark& mark : result->sweep->peaks)
       if (!pinned && fp.line && fp.measurement == mark.measurement && fp.peak == mark.peak) pinned = &fp;
   ASSERT_TRUE(pinned);
-  doc.edit("pin", Change::Measurements, [&](Project& p) {
+  doc.edit("pin", [&](Project& p) {
     p.measurements[static_cast<std::size_t>(pinned->measurement)].peaks[static_cast<std::size_t>(pinned->peak)].assign =
         PinnedAssignment{pinned->line->cls, pinned->line->upper, pinned->line->lower};
   });
@@ -203,7 +203,7 @@ TEST(FitView, LabelsOfTheFitAppearOnTheLinesView) {
   EXPECT_EQ(shown, QStringList{peakLabelText(pinned->label, pinned->line->cls)});
   // A change of the measurements drops the labels (their indices would no longer match).
   doc.setFitLabels(labels);
-  doc.edit("drop a set", Change::Measurements, [](Project& p) { p.measurements.pop_back(); });
+  doc.edit("drop a set", [](Project& p) { p.measurements.pop_back(); });
   EXPECT_TRUE(doc.fitLabels().isEmpty());
 }
 

@@ -188,7 +188,7 @@ FitView::FitView(const ViewContext& viewContext, QWidget* parent)
   connect(parameterTable_, &QTableWidget::itemChanged, this, &FitView::onParameterItemChanged);
   connect(startsBox_, &QSpinBox::valueChanged, this, [this](int starts) {
     if (!context().document || context().document->project().fit.starts == starts) return;
-    context().document->edit(tr("Number of fit starts"), Change::Fit, [starts](Project& p) { p.fit.starts = starts; });
+    context().document->edit(tr("Number of fit starts"), [starts](Project& p) { p.fit.starts = starts; });
   });
   connect(runner_, &JobRunner::progress, this, [this](double f) {
     progress_->setRange(0, 100);
@@ -273,8 +273,7 @@ void FitView::startRun(FitOptions options, bool assignOnly) {
 void FitView::applyToProject() {
   if (!outcome_ || outcome_->assignOnly || !context().document) return;
   const FitResult result = outcome_->result;
-  context().document->edit(tr("Apply fit results"), Change::Centre | Change::Strain,
-                           [&result](Project& p) { p = applyFitToProject(p, result); });
+  context().document->edit(tr("Apply fit results"), [&result](Project& p) { p = applyFitToProject(p, result); });
 }
 
 void FitView::onFitFinished(const FitOutcomePtr& outcome) {
@@ -301,7 +300,7 @@ void FitView::onParameterItemChanged(QTableWidgetItem* item) {
   const QString text = (free ? tr("Free fit parameter %1") : tr("Fix fit parameter %1")).arg(QString::fromStdString(name));
   // Deferred: the edit refreshes this table, which must not happen inside its own signal.
   QMetaObject::invokeMethod(this, [this, name, free, text] {
-    context().document->edit(text, Change::Fit, [&](Project& p) {
+    context().document->edit(text, [&](Project& p) {
       auto& list = p.fit.free;
       const auto at = std::find(list.begin(), list.end(), name);
       if (free && at == list.end()) list.push_back(name);

@@ -306,7 +306,7 @@ void PlannerView::onMapClick(QMouseEvent* event) {
   const MagnetCalibration& magnet = context().document->project().magnet;
   const Vec3 nominal = magnet.nominalFieldLab(magnitudeBox_->value() * directionFromAngles(polar, azimuth));
   const auto angles = anglesOfDirection(nominal);
-  context().document->edit(tr("Field direction from the planner map"), Change::Field, [&](Project& p) {
+  context().document->edit(tr("Field direction from the planner map"), [&](Project& p) {
     p.field = FieldSetting::fromAngles(nominal.norm(), angles[0], angles[1]);
   });
 }

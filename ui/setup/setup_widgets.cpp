@@ -1,4 +1,4 @@
-#include "ui/setup_widgets.h"
+#include "ui/setup/setup_widgets.h"
 
 #include <QHBoxLayout>
 #include <QSignalBlocker>
@@ -44,6 +44,15 @@ void SliderSpin::setValue(double value) {
   const QSignalBlocker a(slider_), b(spin_);
   spin_->setValue(value);
   slider_->setValue(toSlider(value));
+}
+
+QDoubleSpinBox* makeSpinBox(double minimum, double maximum, int decimals, const QString& suffix) {
+  auto* s = new QDoubleSpinBox;
+  s->setRange(minimum, maximum);
+  s->setDecimals(decimals);
+  s->setSuffix(suffix);
+  s->setKeyboardTracking(false);
+  return s;
 }
 
 Vec3Edit::Vec3Edit(double minimum, double maximum, int decimals, QWidget* parent) : QWidget(parent) {

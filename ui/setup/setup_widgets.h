@@ -1,6 +1,7 @@
 #pragma once
 // Small input widgets of the setup panel: a slider coupled to a spin box (drags reported so the
-// document can merge them into one undo step) and a three-component vector editor.
+// document can merge them into one undo step), a three-component vector editor and a spin box
+// that reports only finished entries.
 #include <QDoubleSpinBox>
 #include <QSlider>
 #include <QWidget>
@@ -31,6 +32,9 @@ private:
   QDoubleSpinBox* spin_ = nullptr;
   double step_ = 1;
 };
+
+/// A spin box with range, decimals and suffix that reports a value only when the entry is finished.
+QDoubleSpinBox* makeSpinBox(double minimum, double maximum, int decimals, const QString& suffix);
 
 class Vec3Edit : public QWidget {
   Q_OBJECT
