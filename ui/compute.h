@@ -9,7 +9,7 @@
 #include <optional>
 
 #include "core/fit/project_fit.h"
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/optics/spectrum.h"
 #include "core/sweep/sweep.h"
 #include "ui/jobs/job_runner.h"

@@ -53,6 +53,14 @@ std::vector<EditCase> editCases() {
   };
 }
 
+/// The project parts named by the recorded changed() signals; the file-state signal (the undo
+/// stack becoming clean or dirty) is not a project part and is left out.
+Changes partsAnnounced(const QSignalSpy& changed) {
+  Changes parts;
+  for (const auto& args : changed) parts |= args.front().value<Changes>();
+  return parts & ~Changes(Change::File);
+}
+
 TEST(EditRefresh, EachKindOfEditRefreshesExactlyItsSections) {
   ProjectDocument doc;
   doc.open(kExample);
@@ -63,18 +71,14 @@ TEST(EditRefresh, EachKindOfEditRefreshesExactlyItsSections) {
     std::vector<std::unique_ptr<QSignalSpy>> spies;
     for (SetupSection* s : panel.sections()) spies.push_back(std::make_unique<QSignalSpy>(s, &SetupSection::refreshed));
     doc.edit(c.name, c.mutate);
-    Changes announced;
-    for (const auto& args : changed)
-      if (args.front().value<Changes>() != Changes(Change::File)) announced |= args.front().value<Changes>();
-    EXPECT_EQ(announced, c.announced) << c.name;
+    EXPECT_EQ(partsAnnounced(changed), c.announced) << c.name;
     for (std::size_t i = 0; i < spies.size(); ++i)
       EXPECT_EQ(spies[i]->count(), c.refreshed.count(static_cast<Section>(i)) ? 1 : 0)
           << c.name << ": section " << i << " (" << typeid(*panel.sections()[i]).name() << ")";
     // Undo announces the same parts and refreshes the same sections again.
     QSignalSpy undone(&doc, &ProjectDocument::changed);
     doc.undoStack().undo();
-    ASSERT_FALSE(undone.isEmpty()) << c.name;
-    EXPECT_EQ(undone.back().front().value<Changes>(), c.announced) << c.name;
+    EXPECT_EQ(partsAnnounced(undone), c.announced) << c.name;
   }
 }
 

@@ -8,6 +8,7 @@
 #include <QVBoxLayout>
 
 #include "core/common/errors.h"
+#include "core/project/field_semantics.h"
 #include "ui/setup/setup_widgets.h"
 
 namespace finestra::ui {
