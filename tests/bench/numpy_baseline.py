@@ -6,9 +6,9 @@ tests/bench/planner_vs_numpy.sh, scripts/bench_report.sh) and, through its impor
 an independent second implementation that tests/bench/numpy_lines_check.py compares with
 `finestra-cli lines --format json`.
 
-Model (docs/physics.md, "Hamiltonian of one manifold" and "Optical transitions"): each manifold is
-an orbital doublet {x, y} times spin 1/2, basis |x up>, |x down>, |y up>, |y down> (orbital index
-slow). With Pauli matrices sigma on the orbit and s on the spin, in GHz and tesla:
+Model (docs/physics.md, Hamiltonian of one manifold; docs/physics.md, Optical transitions): each
+manifold is an orbital doublet {x, y} times spin 1/2, basis |x up>, |x down>, |y up>, |y down>
+(orbital index slow). With Pauli matrices sigma on the orbit and s on the spin, in GHz and tesla:
 
     H = -(lambda/2) sigma_y s_z + [a1g + (jt_x - eg_x) sigma_z + (jt_y + eg_y) sigma_x]
         + q mu_B B_z sigma_y + (g mu_B / 2) B.s
@@ -62,7 +62,7 @@ def spin(op: np.ndarray) -> np.ndarray:
 
 def class_frames() -> np.ndarray:
     """Defect frames of the four orientation classes, shape (4, 3, 3); rows are the x, y, z axes
-    in crystal coordinates (docs/physics.md, "Frames"). Class 0: z = [111], x = [11-2] (in a
+    in crystal coordinates (docs/physics.md, Frames). Class 0: z = [111], x = [11-2] (in a
     mirror plane), y = z cross x; classes 1..3 follow from the cubic twofold rotations about
     [100], [010], [001], which flip the signs of two crystal coordinates."""
     z = np.array([1.0, 1.0, 1.0]) / np.sqrt(3.0)

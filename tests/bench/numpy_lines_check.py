@@ -11,8 +11,8 @@ on the basis chosen inside the degenerate pair, so sums over degenerate levels a
 
 Scope: projects without an isotope (the NumPy program models the 4-state manifolds). The field
 forms, the sample frame, the magnet calibration, the crystal strain tensor and the per-manifold
-E-strain of the project file are all honoured (docs/physics.md, "Frames", "Strain",
-"Magnet calibration").
+E-strain of the project file are all honoured (docs/physics.md, Frames; docs/physics.md, Strain;
+docs/physics.md, Magnet calibration).
 
 Usage: numpy_lines_check.py FINESTRA_CLI PROJECT.json [PROJECT.json ...]
 Exit 0 when every project agrees, 1 on a mismatch (each one printed), 2 on bad input.
@@ -40,8 +40,8 @@ class BadInput(Exception):
 
 
 def centre_parameters(project: dict, origin: str) -> dict[str, float]:
-    """Preset values replaced by the project's overrides (the resolution of docs/architecture.md,
-    "Presets and provenance"), restricted to the keys this check needs."""
+    """Preset values replaced by the project's overrides, as the engine resolves them
+    (docs/architecture.md, Presets and provenance)."""
     centre = project.get("centre", {})
     if centre.get("isotope") is not None:
         raise BadInput(f"{origin}: centre.isotope: the NumPy program models the 4-state manifolds only")
@@ -98,7 +98,7 @@ def strain_tensor(project: dict) -> np.ndarray:
 
 
 def manifold(values: dict, suffix: str, strain_defect: np.ndarray, extra_eg: dict | None) -> Manifold:
-    """One manifold with its strain terms (docs/physics.md, "Strain"): couplings in PHz per unit
+    """One manifold with its strain terms (docs/physics.md, Strain): couplings in PHz per unit
     strain, 1 PHz = 1e6 GHz."""
     e = strain_defect
     coupling = lambda name: 1e6 * values[f"{name}_{suffix}_PHz"]  # noqa: E731
