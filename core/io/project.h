@@ -1,6 +1,6 @@
 #pragma once
-// The project: everything a user sets up, as stored in the project file (architecture.md,
-// "finestra-project" version 1). Plain data; the engine is built from it with makeModelSetup().
+// The project: everything a user sets up, as stored in the project file (docs/architecture.md,
+// Project file). Plain data; the engine is built from it with makeModelSetup().
 #include <map>
 #include <optional>
 #include <string>
