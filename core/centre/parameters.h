@@ -1,6 +1,7 @@
 #pragma once
 // Centre parameters: the named numbers that define one group-IV centre model, with units in their
-// keys (architecture.md). A value not known is stored as NaN and must be set before a computation
+// keys (docs/architecture.md, Parameters and limits).
+// A value not known is stored as NaN and must be set before a computation
 // that needs it (require() throws MissingValueError naming the key).
 #include <array>
 #include <cmath>

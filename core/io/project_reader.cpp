@@ -1,4 +1,4 @@
-// Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
+// Reading the version-1 project file (docs/architecture.md, Project file) strictly: unknown keys, wrong types and
 // non-finite numbers are errors naming the key path.
 #include <cmath>
 

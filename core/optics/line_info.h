@@ -10,7 +10,7 @@
 namespace finestra {
 
 /// Fraction of a line's dipole strength along its class's symmetry axis, |a·ẑ|²/|a|² (0..1).
-/// At zero field B and C lines give 1, A and D lines 0 (physics.md §4). NaN for a dark line.
+/// At zero field B and C lines give 1, A and D lines 0 (docs/physics.md, Optical transitions). NaN for a dark line.
 double axisParallelFraction(const OpticalLine& line, int cls);
 
 /// "∥ axis 97 %" / "⊥ axis 88 %" (the larger share), "dark" for a line with no dipole strength.
