@@ -66,7 +66,9 @@ def main():
         return
     figure, (levels_axes, residual_axes) = plt.subplots(1, 2, figsize=(11, 4.5))
     for cls in fan["classes"]:
-        levels_axes.plot(fan["x"], cls["ground_GHz"], lw=0.8, color=f"C{cls['class']}")
+        drawn = levels_axes.plot(fan["x"], cls["ground_GHz"], lw=0.8, color=f"C{cls['class']}")
+        drawn[0].set_label(f"class {cls['class']}")
+    levels_axes.legend(loc="upper left", fontsize=8)
     levels_axes.set(xlabel="field magnitude (T)", ylabel="ground levels (GHz)",
                     title="Ground levels of the four classes (demo project)")
     residuals = [a["residual_GHz"] for a in result.assignments if a["residual_GHz"] is not None]

@@ -9,6 +9,7 @@
 #include "app/python/python_json.h"
 #include "app/python/python_progress.h"
 #include "app/python/python_project.h"
+#include "core/common/errors.h"
 #include "core/fit/fit_report.h"
 
 namespace py = pybind11;
@@ -59,21 +60,13 @@ PyFitResult runFit(const PyProject& p, const std::optional<std::vector<std::stri
   options.starts = starts;
   options.seed = seed;
   PythonProgress progress(callback);
-  const Project project = p.project;
+  const PyProject snapshot = p;  // the caller's object may change while the GIL is released
   FitResult result = computeWithoutGil(progress, [&](const ProgressControl& control) {
     options.progress = control;
-    try {
-      return fitProject(project, options);
-    } catch (const MissingValueError& e) {
-      throw MissingValueError(p.origin + ": " + e.where(),
-                              std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
-    } catch (const InputError& e) {
-      throw InputError(p.origin + ": " + e.where(),
-                       std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
-    }
+    return inProject(snapshot, [&] { return fitProject(snapshot.project, options); });
   });
-  nlohmann::ordered_json json = fitJson(project, result);
-  return {std::move(result), p, std::move(json)};
+  nlohmann::ordered_json json = fitJson(snapshot.project, result);
+  return {std::move(result), snapshot, std::move(json)};
 }
 
 }  // namespace

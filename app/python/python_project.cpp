@@ -90,15 +90,7 @@ std::string reprOf(const PyProject& p) {
 }  // namespace
 
 CentreModel modelOf(const PyProject& p) {
-  try {
-    return CentreModel(makeModelSetup(p.project));
-  } catch (const MissingValueError& e) {
-    throw MissingValueError(p.origin + ": " + e.where(),
-                            std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
-  } catch (const InputError& e) {
-    throw InputError(p.origin + ": " + e.where(),
-                     std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
-  }
+  return inProject(p, [&] { return CentreModel(makeModelSetup(p.project)); });
 }
 
 void bindProject(py::module_& m) {
