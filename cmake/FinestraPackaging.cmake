@@ -26,10 +26,10 @@ set(CPACK_PACKAGE_VERSION ${PROJECT_VERSION})
 set(CPACK_PACKAGE_VENDOR "Finestra developers")
 set(CPACK_PACKAGE_CONTACT "Finestra developers <finestra@localhost>")
 set(CPACK_PACKAGE_DESCRIPTION_SUMMARY "fine structure of group-IV vacancy centres in diamond")
-set(CPACK_PACKAGE_DESCRIPTION
-    "Levels, optical lines, spectra, peak fitting, strain estimates and magnet planning for SiV-, GeV-, SnV- and PbV-\n"
-    "centres in diamond: the desktop application finestra, the command line finestra-cli and the Python module\n"
-    "finestra, with invented example projects in /usr/share/finestra/examples.")
+string(CONCAT CPACK_PACKAGE_DESCRIPTION
+       "Levels, optical lines, spectra, peak fitting, strain estimates and magnet planning for SiV-, GeV-,\n"
+       "SnV- and PbV- centres in diamond: the desktop application finestra, the command line finestra-cli\n"
+       "and the Python module finestra, with invented example projects in /usr/share/finestra/examples.")
 set(CPACK_PACKAGING_INSTALL_PREFIX /usr)
 set(CPACK_DEBIAN_FILE_NAME DEB-DEFAULT)
 set(CPACK_DEBIAN_PACKAGE_SECTION science)
@@ -41,12 +41,10 @@ set(CPACK_DEBIAN_PACKAGE_SHLIBDEPS ON)
 set(FINESTRA_DEB_DEPENDS)
 if(FINESTRA_BUILD_GUI)
   list(APPEND FINESTRA_DEB_DEPENDS "qt6-qpa-plugins")
-  set(CPACK_DEBIAN_PACKAGE_RECOMMENDS "qt6-svg-plugins")
 endif()
 if(FINESTRA_BUILD_PYTHON)
-  list(APPEND FINESTRA_DEB_DEPENDS
-       "python3 (>= ${Python3_VERSION_MAJOR}.${Python3_VERSION_MINOR})"
-       "python3 (<< ${Python3_VERSION_MAJOR}.${Python3_VERSION_MINOR}.99)" "python3-numpy")
+  get_property(FINESTRA_PYTHON_DEPENDS GLOBAL PROPERTY FINESTRA_DEB_PYTHON_DEPENDS)  # app/python
+  list(APPEND FINESTRA_DEB_DEPENDS ${FINESTRA_PYTHON_DEPENDS})
   set(CPACK_DEBIAN_PACKAGE_SUGGESTS "python3-matplotlib")
 endif()
 list(JOIN FINESTRA_DEB_DEPENDS ", " CPACK_DEBIAN_PACKAGE_DEPENDS)

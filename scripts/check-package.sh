@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Builds the Debian package in a configured and built tree (default build/release), installs it
 # with apt-get (root, or sudo) and checks the installed copy: finestra-cli --version and lines on an
-# installed example, the Python module, the desktop file, the AppStream metainfo and the MIME type.
+# installed example, the Python module, the desktop file, the AppStream metainfo and the MIME type
+# (a project recognised by its content, plain JSON left alone).
 # Fails loudly on the first problem. Usage: scripts/check-package.sh [BUILD_DIR]
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
@@ -28,10 +29,19 @@ desktop-file-validate /usr/share/applications/finestra.desktop
 appstreamcli validate --no-net /usr/share/metainfo/org.finestra.Finestra.metainfo.xml
 grep -q 'application/x-finestra-project+json' /usr/share/mime/types \
   || fail "the MIME database does not know application/x-finestra-project+json"
-[[ "$(grep -c . /usr/share/mime/packages/finestra.xml)" -gt 0 ]]
+# Our projects are recognised by content, plain JSON stays JSON (gio: package libglib2.0-bin).
+probe="$(mktemp -d)"
+cp "$examples/membrane-vector-magnet.json" "$probe/project.json"
+echo '{"plain": true}' >"$probe/plain.json"
+mime_of() { gio info -a standard::content-type "$1" | sed -n 's/.*standard::content-type: //p'; }
+[[ "$(mime_of "$probe/project.json")" == application/x-finestra-project+json ]] || fail "a project is not recognised"
+[[ "$(mime_of "$probe/plain.json")" == application/json ]] || fail "plain JSON is claimed by Finestra"
+rm -rf "$probe"
 [[ -f /usr/share/icons/hicolor/scalable/apps/finestra.svg ]] || fail "application icon missing"
 
-if dpkg-deb --contents "${deb[0]}" | grep -q 'dist-packages/finestra/'; then
+contents="$(dpkg-deb --contents "${deb[0]}")"
+if grep -q 'dist-packages/finestra/' <<<"$contents"; then
   (cd /tmp && /usr/bin/python3 -c 'import finestra, sys; print("python module", finestra.__version__, finestra.__file__); sys.exit(finestra.__version__ != sys.argv[1])' "$version")
+  (cd /tmp && /usr/bin/python3 "$examples/python_sweep_and_fit.py" /tmp/finestra-installed-example.png) | tail -3
 fi
 echo "check-package: $(basename "${deb[0]}") installed and checked"

@@ -11,7 +11,7 @@ packages=(
   clang-14 libclang-rt-14-dev
   xvfb xauth python3 python3-numpy
   pybind11-dev python3-dev python3-pytest python3-matplotlib
-  dpkg-dev file appstream desktop-file-utils shared-mime-info
+  dpkg-dev appstream desktop-file-utils shared-mime-info libglib2.0-bin
 )
 if [[ $(id -u) -eq 0 ]]; then sudo=(); else sudo=(sudo); fi
 export DEBIAN_FRONTEND=noninteractive
