@@ -10,8 +10,8 @@
 #include "app/python/python_progress.h"
 #include "app/python/python_project.h"
 #include "core/common/errors.h"
-#include "core/model/evaluate.h"
 #include "core/optics/line_grid.h"
+#include "core/project/evaluate.h"
 #include "core/report/reports.h"
 
 namespace py = pybind11;

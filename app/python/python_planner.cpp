@@ -17,11 +17,13 @@ namespace finestra::python {
 namespace {
 
 // The request a project implies before any request document: its selected classes (the first is
-// the target) and the magnitude of its magnet setting (0.5 T at zero field), as finestra-cli plan.
+// the target), its magnet calibration and the magnitude of its magnet setting (0.5 T at zero
+// field), as finestra-cli plan.
 PlanRequest projectRequest(const Project& project, const CentreModel& model) {
   PlanRequest request;
   request.settings.classes = project.classes;
   request.targetClass = project.classes.empty() ? 0 : project.classes.front();
+  request.magnet = project.magnet;  // reach directions and magnitudes are magnet settings
   const double magnitude = project.field.labVector(model.setup().lab).norm();
   request.magnitudesT = {magnitude > 0 ? magnitude : 0.5};
   return request;
@@ -94,7 +96,7 @@ classes and field magnitude, full sphere), a dict in the plan-request layout (ke
 magnitudes_T, drive_lab, lines, reach, constraints, objective, best) or the path of a request file.)doc");
   m.def("plan_map", &planMap, py::arg("project"), py::arg("magnitude_T") = py::none(), py::arg("step_deg") = 1.0,
         py::arg("request") = py::none(), py::arg("progress") = py::none(),
-        R"doc(Every planner figure over the whole direction sphere (lab angles) at one field magnitude.
+        R"doc(Every planner figure over the whole sphere of true-field directions (lab angles) at one magnitude.
 
 Returns a dict: "magnitude_T"; "polar_deg" (P,) and "azimuth_deg" (A,) grid axes in degrees, both ends
 included, step step_deg; "classes" (C,) the selected classes; and one numpy.ma array of shape (C, P, A)

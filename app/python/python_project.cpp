@@ -8,6 +8,7 @@
 
 #include "app/python/python_json.h"
 #include "core/common/errors.h"
+#include "core/project/field_semantics.h"
 
 namespace py = pybind11;
 

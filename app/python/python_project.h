@@ -7,7 +7,8 @@
 #include <utility>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 
 namespace finestra::python {
 
