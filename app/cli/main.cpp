@@ -8,6 +8,7 @@
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
 #include "core/common/errors.h"
+#include "core/common/version.h"
 
 using namespace finestra::cli;
 
@@ -24,6 +25,7 @@ void addProjectOptions(CLI::App* cmd, CommonOptions& options) {
 
 int main(int argc, char** argv) {
   CLI::App app{"finestra-cli: fine structure of group-IV vacancy centres in diamond"};
+  app.set_version_flag("--version", std::string(finestra::kVersion), "print the Finestra version and exit");
   app.require_subcommand(1);
   CommonOptions common;
   OutputFormat presetFormat = OutputFormat::Table;
