@@ -39,6 +39,8 @@ Vec3 projectFieldCrystal(const Project& p, const LabFrame& lab) {
 ModelSetup makeModelSetup(const Project& p) {
   ModelSetup s{resolveCentre(p.centre.preset, p.centre.isotope, p.centre.overrides),
                LabFrame(p.sample.normal, p.sample.inPlaneX, "sample"), p.strain, p.conditions};
+  applyAssumedValues(s.centre, p.centre.assumed);
+  if (p.centre.zplAnchor) s = anchorZpl(std::move(s), *p.centre.zplAnchor);
   return s;
 }
 
@@ -60,6 +62,7 @@ Vec3 nominalSweepFieldLab(const Project& p, const SweepSpec& s, const LabFrame& 
       return nominal.norm() * (std::cos(a) * u + std::sin(a) * v);
     }
     case SweepKind::Strain: return nominal;
+    case SweepKind::Temperature: return nominal;
   }
   return Vec3::Zero();
 }
