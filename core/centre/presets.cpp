@@ -58,6 +58,7 @@ Preset parsePreset(const std::string& text, const std::string& origin) {
     p.name = doc.at("name").get<std::string>();
     p.title = doc.at("title").get<std::string>();
     p.zplReference = doc.value("zpl_reference", std::string());
+    p.notes = doc.value("notes", std::string());
     for (auto& [key, value] : doc.at("parameters").items()) {
       const auto id = findParam(key);
       if (!id || paramInfo(*id).hyperfine)

@@ -30,6 +30,7 @@ struct Preset {
   std::string name;   ///< e.g. "SiV-"
   std::string title;  ///< human-readable
   std::string zplReference;  ///< what the ZPL value is (centroid, which line, which temperature)
+  std::string notes;         ///< choices between published families, alternatives
   std::array<ValueProvenance, kParamCount> values;  ///< hyperfine entries NotUsed
   std::map<std::string, std::array<std::optional<ValueProvenance>, kParamCount>> isotopes;
 };

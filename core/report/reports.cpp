@@ -154,7 +154,7 @@ ordered presetsJson(const std::vector<Preset>& presets) {
         if (table[static_cast<std::size_t>(info.id)]) iso[std::string(info.key)] = entry(*table[static_cast<std::size_t>(info.id)]);
       isotopes[name] = iso;
     }
-    out.push_back(ordered{{"name", p.name}, {"title", p.title}, {"zpl_reference", p.zplReference},
+    out.push_back(ordered{{"name", p.name}, {"title", p.title}, {"zpl_reference", p.zplReference}, {"notes", p.notes},
                           {"parameters", params}, {"isotopes", isotopes}});
   }
   return out;
@@ -167,6 +167,8 @@ Table presetsTable(const std::vector<Preset>& presets) {
                       valueStatusText(v.status), v.source});
   };
   for (const Preset& p : presets) {
+    t.rows.push_back({p.name, "-", "zpl_reference", "-", "", "note", p.zplReference});
+    if (!p.notes.empty()) t.rows.push_back({p.name, "-", "notes", "-", "", "note", p.notes});
     for (const ParamInfo& info : paramTable())
       if (!info.hyperfine) add(p.name, "-", info, p.values[static_cast<std::size_t>(info.id)]);
     for (const auto& [name, table] : p.isotopes)
