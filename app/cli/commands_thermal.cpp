@@ -4,6 +4,8 @@
 #include <iostream>
 
 #include "core/common/errors.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 #include "core/report/thermal_report.h"
 
 namespace finestra::cli {

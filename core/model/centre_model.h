@@ -10,7 +10,7 @@
 #include "core/centre/presets.h"
 #include "core/crystal/frames.h"
 #include "core/hamiltonian/hamiltonian.h"
-#include "core/optics/populations.h"
+#include "core/model/populations.h"
 
 namespace finestra {
 
@@ -18,11 +18,15 @@ namespace finestra {
 struct EgStrain {
   double magnitudeGHz = 0;
   double angleDeg = 0;  ///< ε_Egx = |ε| cos α, ε_Egy = |ε| sin α
+
+  bool operator==(const EgStrain&) const = default;
 };
 
 struct StrainSetting {
   Mat3 crystal = Mat3::Zero();  ///< symmetric strain tensor in crystal axes
   EgStrain extraGround, extraExcited;
+
+  bool operator==(const StrainSetting&) const = default;
 };
 
 struct DetectionConditions {
@@ -33,6 +37,8 @@ struct DetectionConditions {
   double extraBroadeningGHz = 0;    ///< inhomogeneous width added to every line's homogeneous FWHM
   bool phononSideband = false;      ///< PL spectra include the phonon sideband (Debye–Waller split)
   std::optional<double> bathT2StarS;  ///< bath-limited spin T2* set by the user (s), beside the phonon limit
+
+  bool operator==(const DetectionConditions&) const = default;
 };
 
 struct ModelSetup {

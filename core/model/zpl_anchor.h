@@ -13,6 +13,8 @@ struct ZplAnchor {
   double wavelengthNm = 0;  ///< where that line is measured
   bool air = false;         ///< wavelength in standard air (Edlén) rather than vacuum
   double temperatureK = 4;  ///< temperature of the measurement
+
+  bool operator==(const ZplAnchor&) const = default;
 };
 
 /// The setup with zpl_THz replaced by the centroid that puts the anchor line at its wavelength

@@ -3,7 +3,7 @@
 #include <cmath>
 
 #include "core/common/errors.h"
-#include "core/model/evaluate.h"
+#include "core/project/evaluate.h"
 
 namespace finestra {
 

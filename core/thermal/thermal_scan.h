@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/thermal/level_widths.h"
 
 namespace finestra {

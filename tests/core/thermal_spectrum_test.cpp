@@ -5,7 +5,9 @@
 #include <cmath>
 
 #include "core/common/errors.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/project/evaluate.h"
+#include "core/project/model_setup.h"
 #include "core/optics/spectrum.h"
 #include "core/sweep/sweep.h"
 #include "core/thermal/level_widths.h"
