@@ -7,6 +7,7 @@
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_thermal.h"
 #include "core/common/errors.h"
 #include "core/common/version.h"
 
@@ -65,6 +66,11 @@ int main(int argc, char** argv) {
   addProjectOptions(strainCmd, common);
   addStrainOptions(strainCmd, strainOptions);
 
+  ThermalOptions thermalOptions;
+  auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
+  addProjectOptions(thermalCmd, common);
+  addThermalOptions(thermalCmd, thermalOptions);
+
   try {
     app.parse(argc, argv);
   } catch (const CLI::ParseError& e) {
@@ -79,6 +85,7 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*thermalCmd) return runThermal(common, thermalOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;

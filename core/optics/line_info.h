@@ -46,7 +46,7 @@ std::vector<LineCandidate> nearestLinesForPeak(const CentreModel& model, const P
                                                std::size_t count);
 
 /// Position of a magnet setting on a sweep's axis: |B| for a magnitude sweep, the angle (deg) of
-/// the field in the sweep plane for an angle sweep; none for a strain sweep or a zero field in an
+/// the field in the sweep plane for an angle sweep; none for a strain or temperature sweep or a zero field in an
 /// angle sweep.
 std::optional<double> sweepCoordinate(const SweepSpec& sweep, const LabFrame& lab, const FieldSetting& field);
 
