@@ -7,6 +7,7 @@
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_resonance.h"
 #include "core/common/errors.h"
 
 using namespace finestra::cli;
@@ -62,6 +63,14 @@ int main(int argc, char** argv) {
   auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
   addProjectOptions(strainCmd, common);
   addStrainOptions(strainCmd, strainOptions);
+  MicrowaveOptions microwaveOptions;
+  auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
+  addProjectOptions(microwaveCmd, common);
+  addMicrowaveOptions(microwaveCmd, microwaveOptions);
+  LambdaOptions lambdaOptions;
+  auto* lambdaCmd = app.add_subcommand("lambda-systems", "Lambda systems: excited levels linked to two ground levels by allowed lines");
+  addProjectOptions(lambdaCmd, common);
+  addLambdaOptions(lambdaCmd, lambdaOptions);
 
   try {
     app.parse(argc, argv);
@@ -77,6 +86,8 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
+    if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;
