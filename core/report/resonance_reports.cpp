@@ -1,6 +1,7 @@
 #include "core/report/resonance_reports.h"
 
 #include <cmath>
+#include <sstream>
 
 namespace finestra {
 using ordered = nlohmann::ordered_json;
@@ -13,7 +14,14 @@ constexpr const char* kUndefinedCell = "—";
 
 ordered numberOrNull(double x) { return std::isfinite(x) ? ordered(x) : ordered(nullptr); }
 
-std::string cell(double x, int decimals) { return std::isfinite(x) ? fixed(x, decimals) : kUndefinedCell; }
+// Strengths span many decades (allowed ~1, forbidden ~1e-12): three significant digits.
+std::string cell(double x) {
+  if (!std::isfinite(x)) return kUndefinedCell;
+  std::ostringstream out;
+  out.precision(3);
+  out << x;
+  return out.str();
+}
 
 std::string projection(double m) {
   // Half-integer projections as fractions: −1/2, 3/2, ...
@@ -63,7 +71,7 @@ Table microwaveTable(const std::vector<ClassMicrowave>& classes) {
     for (const MicrowaveTransition& x : c.transitions) {
       const bool nucleus = x.nuclearChange != NuclearChange::NoNucleus;
       t.rows.push_back({std::to_string(c.cls), std::to_string(x.lower), std::to_string(x.upper), fixed(x.frequencyGHz, 6),
-                        cell(x.strength, 6), cell(x.spinPart, 6), cell(x.orbitalPart, 6), cell(x.nuclearPart, 9),
+                        cell(x.strength), cell(x.spinPart), cell(x.orbitalPart), cell(x.nuclearPart),
                         pair({x.spinProjectionLower, x.spinProjectionUpper}, 3),
                         nucleus ? projection(x.nuclearProjectionLower) + " / " + projection(x.nuclearProjectionUpper)
                                 : kUndefinedCell,
@@ -104,8 +112,7 @@ Table lambdaTable(const std::vector<ClassLambda>& classes) {
     for (const LambdaSystem& s : c.systems)
       t.rows.push_back({std::to_string(c.cls), std::to_string(s.excited),
                         std::to_string(s.ground[0]) + "," + std::to_string(s.ground[1]), fixed(s.lineGHz[0], 4),
-                        fixed(s.lineGHz[1], 4), fixed(s.twoPhotonGHz, 6), fixed(s.strength[0], 4), fixed(s.strength[1], 4),
-                        fixed(s.product, 5), fixed(s.balance, 4), fixed(s.branching[0], 4), fixed(s.branching[1], 4),
+                        fixed(s.lineGHz[1], 4), fixed(s.twoPhotonGHz, 6), cell(s.strength[0]), cell(s.strength[1]), cell(s.product), fixed(s.balance, 4), fixed(s.branching[0], 4), fixed(s.branching[1], 4),
                         pair(s.spinProjection, 3)});
   return t;
 }

@@ -31,7 +31,7 @@ ClassLambda lambdasAt(const CentreModel& model, const Vec3& field, ClassSolution
 TEST(ResonanceLambda, TwoPhotonDetuningIsTheGroundLevelDifference) {
   std::mt19937 rng(7);
   for (const char* preset : {"SiV-", "SnV-"}) {
-    const CentreModel model(testing::setupFor(preset, {}, testing::randomStrain(rng, 1e-5)));
+    const CentreModel model(finestra::testing::setupFor(preset, {}, finestra::testing::randomStrain(rng, 1e-5)));
     ClassSolution solution;
     const ClassLambda lambdas = lambdasAt(model, fieldAtTilt(0, 0.8, 50), &solution);
     ASSERT_FALSE(lambdas.systems.empty()) << preset;
@@ -56,7 +56,7 @@ TEST(ResonanceLambda, AxialFieldHasOnlyOrbitalLambdasAndATiltOpensTheSpinLambda)
   // transverse field mixes the spin projections and both legs of the spin Λ of SiV⁻ become
   // allowed, the scheme used for coherent population trapping of the SiV⁻ spin (Rogers et al.,
   // PRL 113, 263602 (2014), from memory).
-  const CentreModel model(testing::setupFor("SiV-"));
+  const CentreModel model(finestra::testing::setupFor("SiV-"));
   const ClassLambda axial = lambdasAt(model, fieldAtTilt(0, 0.5, 0));
   int orbital = 0;
   for (const LambdaSystem& s : axial.systems) {
@@ -74,7 +74,7 @@ TEST(ResonanceLambda, AxialFieldHasOnlyOrbitalLambdasAndATiltOpensTheSpinLambda)
 }
 
 TEST(ResonanceLambda, CptDipsSitAtTheOtherLegOfEachLambda) {
-  const CentreModel model(testing::setupFor("SiV-"));
+  const CentreModel model(finestra::testing::setupFor("SiV-"));
   ClassSolution solution;
   const ClassLambda lambdas = lambdasAt(model, fieldAtTilt(0, 0.5, 70), &solution);
   ASSERT_FALSE(lambdas.systems.empty());

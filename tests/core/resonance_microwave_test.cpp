@@ -23,7 +23,7 @@ constexpr double kBohr = 13.9962449361, kG = 2.00231930436;
 constexpr double kEgStrain = 10.0;  // invented E-strain of the ground manifold (GHz), angle 0
 
 ModelSetup siv29(double egStrain = kEgStrain) {
-  ModelSetup s = testing::setupFor("SiV-", {{"A_par_u_MHz", 0.0}, {"A_perp_u_MHz", 0.0}}, Mat3::Zero(), "29Si");
+  ModelSetup s = finestra::testing::setupFor("SiV-", {{"A_par_u_MHz", 0.0}, {"A_perp_u_MHz", 0.0}}, Mat3::Zero(), "29Si");
   s.strain.extraGround.magnitudeGHz = egStrain;
   return s;
 }
@@ -145,7 +145,9 @@ TEST(ResonanceMicrowave, NuclearFlipsAreForbiddenOrWeakOnAxisAndAppearWithATrans
   const ClassMicrowave axial = microwaveTransitions(model, 0, crystalFromDefect(0, tiltedDefect(0.5, 0)), transverseDrive(0));
   for (const auto& t : axial.transitions) {
     const double deltaF = (t.spinProjectionUpper + t.nuclearProjectionUpper) - (t.spinProjectionLower + t.nuclearProjectionLower);
-    if (std::abs(std::abs(deltaF) - 1.0) > 0.1 && std::isfinite(t.strength)) EXPECT_LT(t.strength, 1e-20) << t.lower << "→" << t.upper;
+    if (std::abs(std::abs(deltaF) - 1.0) > 0.1 && std::isfinite(t.strength)) {
+      EXPECT_LT(t.strength, 1e-20) << t.lower << "→" << t.upper;
+    }
   }
   EXPECT_LT(ratio(0.0), 1e-4);
   EXPECT_GT(ratio(60.0), 1e-3);
