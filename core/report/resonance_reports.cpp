@@ -132,6 +132,32 @@ Table cptDipsTable(int cls, const std::vector<CptDip>& dips) {
   return t;
 }
 
+namespace {
+std::string spinArrow(double sz) { return sz > 0.25 ? "↑" : (sz < -0.25 ? "↓" : "~"); }
+}  // namespace
+
+std::string microwaveLabel(const MicrowaveTransition& t) {
+  std::string text = spinArrow(t.spinProjectionLower) + "→" + spinArrow(t.spinProjectionUpper);
+  if (t.nuclearChange == NuclearChange::Preserving) text += " mI " + projection(t.nuclearProjectionLower);
+  if (t.nuclearChange == NuclearChange::Flipping)
+    text += " mI " + projection(t.nuclearProjectionLower) + "→" + projection(t.nuclearProjectionUpper);
+  return text;
+}
+
+std::string describeMicrowaveTransition(int cls, const MicrowaveTransition& t) {
+  std::ostringstream out;
+  out << "class " << cls << ", levels " << t.lower << " → " << t.upper << "\n"
+      << "frequency " << fixed(t.frequencyGHz, 6) << " GHz\n"
+      << "strength " << cell(t.strength) << " (spin " << cell(t.spinPart) << ", orbital " << cell(t.orbitalPart)
+      << ", nuclear " << cell(t.nuclearPart) << ")\n"
+      << "Sz " << fixed(t.spinProjectionLower, 3) << " → " << fixed(t.spinProjectionUpper, 3);
+  if (t.nuclearChange != NuclearChange::NoNucleus)
+    out << "\nmI " << projection(t.nuclearProjectionLower) << " → " << projection(t.nuclearProjectionUpper) << " ("
+        << nuclearChangeName(t.nuclearChange) << ", purity " << fixed(t.nuclearPurity, 4) << ")";
+  out << "\npopulations " << fixed(t.populationLower, 4) << " / " << fixed(t.populationUpper, 4);
+  return out.str();
+}
+
 Table resonanceSpectrumTable(const ResonanceSpectrum& s) {
   Table t{{"frequency_GHz", "absorption"}, {}};
   for (std::size_t k = 0; k < s.frequencyGHz.size(); ++k) t.rows.push_back({exact(s.frequencyGHz[k]), exact(s.signal[k])});

@@ -22,6 +22,12 @@ Table lambdaTable(const std::vector<ClassLambda>& classes);
 nlohmann::ordered_json cptDipsJson(int cls, int excited, int pumpGround, const std::vector<CptDip>& dips);
 Table cptDipsTable(int cls, const std::vector<CptDip>& dips);
 
+/// Short label of a transition: electron spin projections as arrows (↑ for ⟨S_z⟩ > ¼, ↓ below −¼,
+/// ~ for mixed) and the nuclear projection kept or changed, e.g. "↓→↑ mI 1/2" or "↓→↑ mI 1/2→-1/2".
+std::string microwaveLabel(const MicrowaveTransition& transition);
+/// Several lines for a hover read-out: class, levels, frequency, strength and parts, character, populations.
+std::string describeMicrowaveTransition(int cls, const MicrowaveTransition& transition);
+
 Table resonanceSpectrumTable(const ResonanceSpectrum& spectrum);
 
 }  // namespace finestra
