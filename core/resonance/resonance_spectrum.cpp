@@ -48,11 +48,16 @@ ResonanceSpectrum resonanceSpectrum(const std::vector<ClassMicrowave>& classes, 
   out.signal.assign(static_cast<std::size_t>(request.points), 0.0);
   for (int k = 0; k < request.points; ++k)
     out.frequencyGHz[static_cast<std::size_t>(k)] = from + (to - from) * k / (request.points - 1);
+  double strongest = 0;
+  for (const auto& c : classes)
+    for (const auto& t : c.transitions)
+      if (std::isfinite(t.strength)) strongest = std::max(strongest, std::abs(weight(t)));
   for (const auto& c : classes)
     for (const auto& t : c.transitions) {
       if (!std::isfinite(t.strength)) continue;
       const double w = weight(t);
-      if (w == 0) continue;
+      // Lines below 1e-12 of the strongest change no printed digit of the curve: skipped for speed.
+      if (std::abs(w) <= kNegligibleLineFraction * strongest) continue;
       for (std::size_t k = 0; k < out.signal.size(); ++k) {
         const double x = out.frequencyGHz[k] - t.frequencyGHz;
         out.signal[k] += w * halfWidthSquared / (x * x + halfWidthSquared);

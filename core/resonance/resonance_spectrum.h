@@ -9,6 +9,9 @@ namespace finestra {
 /// Largest number of points of one resonance spectrum.
 inline constexpr int kMaxResonancePoints = 1000000;
 
+/// Lines weaker than this fraction of the strongest population-weighted line are left out of the curve.
+inline constexpr double kNegligibleLineFraction = 1e-12;
+
 struct ResonanceSpectrumRequest {
   double fromGHz = 0, toGHz = 0;  ///< equal: automatic range around the defined transitions
   int points = 2001;
@@ -23,7 +26,8 @@ struct ResonanceSpectrum {
 /// `fwhmGHz`: the linear-response absorption of a weak drive (Abragam, The Principles of Nuclear
 /// Magnetism, Oxford 1961, ch. II). With thermal populations the population difference is the
 /// Boltzmann one; an ODMR contrast under optical pumping has the same positions and strengths but
-/// pumped populations. Transitions with undefined strength are left out. Throws InputError naming
+/// pumped populations. Transitions with undefined strength, and those below kNegligibleLineFraction of the strongest,
+/// are left out. Throws InputError naming
 /// the key for a bad range, point count or width.
 ResonanceSpectrum resonanceSpectrum(const std::vector<ClassMicrowave>& classes, const ResonanceSpectrumRequest& request);
 
