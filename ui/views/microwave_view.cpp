@@ -148,13 +148,18 @@ void MicrowaveView::placeLabels() {
     }
   }
   std::sort(sticks.begin(), sticks.end(), [](const StickRef& a, const StickRef& b) { return a.height > b.height; });
+  // Minimum distance between labels in axis units; a plot not laid out yet (headless export) counts
+  // as 1000 pixels wide.
   constexpr double kLabelWidthPx = 96;
+  const int laidOut = plot_->axisRect()->width();
+  const double widthPx = laidOut > 200 ? laidOut : 1000;
+  const double separation = range.size() * kLabelWidthPx / widthPx;
   std::vector<double> placed;
   for (const StickRef& s : sticks) {
     if (static_cast<int>(placed.size()) == kLabelledSticks || s.height <= 0.02 * sticks.front().height) break;
     const MicrowaveTransition& t = classes_[s.classIndex].transitions[s.transitionIndex];
-    const double px = plot_->xAxis->coordToPixel(axisValue(t.frequencyGHz));
-    if (std::any_of(placed.begin(), placed.end(), [px](double p) { return std::abs(p - px) < kLabelWidthPx; })) continue;
+    const double px = axisValue(t.frequencyGHz);
+    if (std::any_of(placed.begin(), placed.end(), [&](double p) { return std::abs(p - px) < separation; })) continue;
     placed.push_back(px);
     auto* text = new QCPItemText(plot_);
     text->position->setCoords(axisValue(t.frequencyGHz), s.height);
