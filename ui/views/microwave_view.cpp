@@ -169,6 +169,7 @@ void MicrowaveView::placeLabels() {
     QFont f = font();
     f.setPointSize(8);
     text->setFont(f);
+    text->setBrush(QColor(255, 255, 255, 210));  // readable where taller sticks of other classes pass behind
     text->setClipToAxisRect(true);
   }
 }
