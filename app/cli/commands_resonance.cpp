@@ -6,8 +6,10 @@
 #include <optional>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/project/field_semantics.h"
+#include "core/project/model_setup.h"
+#include "core/project/evaluate.h"
 #include "core/report/resonance_reports.h"
 
 namespace finestra::cli {

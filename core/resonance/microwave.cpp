@@ -5,7 +5,7 @@
 
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
-#include "core/optics/populations.h"
+#include "core/model/populations.h"
 #include "core/resonance/level_character.h"
 #include "core/resonance/magnetic_dipole.h"
 

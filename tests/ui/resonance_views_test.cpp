@@ -3,6 +3,7 @@
 #include <gtest/gtest.h>
 #include <qcustomplot.h>
 
+#include "core/project/field_semantics.h"
 #include "core/report/resonance_reports.h"
 #include "ui/compute.h"
 #include "ui/document.h"

@@ -9,6 +9,7 @@
 #include <cmath>
 
 #include "core/common/errors.h"
+#include "core/project/field_semantics.h"
 #include "core/report/resonance_reports.h"
 
 namespace finestra::ui {
