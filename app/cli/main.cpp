@@ -8,6 +8,7 @@
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
 #include "app/cli/commands_thermal.h"
+#include "app/cli/commands_resonance.h"
 #include "core/common/errors.h"
 #include "core/common/version.h"
 
@@ -65,6 +66,14 @@ int main(int argc, char** argv) {
   auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
   addProjectOptions(strainCmd, common);
   addStrainOptions(strainCmd, strainOptions);
+  MicrowaveOptions microwaveOptions;
+  auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
+  addProjectOptions(microwaveCmd, common);
+  addMicrowaveOptions(microwaveCmd, microwaveOptions);
+  LambdaOptions lambdaOptions;
+  auto* lambdaCmd = app.add_subcommand("lambda-systems", "Lambda systems: excited levels linked to two ground levels by allowed lines");
+  addProjectOptions(lambdaCmd, common);
+  addLambdaOptions(lambdaCmd, lambdaOptions);
 
   ThermalOptions thermalOptions;
   auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
@@ -86,6 +95,8 @@ int main(int argc, char** argv) {
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
     if (*thermalCmd) return runThermal(common, thermalOptions);
+    if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
+    if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;
