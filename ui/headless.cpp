@@ -1,5 +1,6 @@
 #include "ui/headless.h"
 
+#include <QEventLoop>
 #include <QFileInfo>
 #include <qcustomplot.h>
 
@@ -7,6 +8,7 @@
 #include "core/io/peak_csv.h"
 #include "ui/document.h"
 #include "ui/figure_export.h"
+#include "ui/jobs/job_runner.h"
 
 namespace finestra::ui {
 
@@ -37,6 +39,7 @@ void runHeadlessExport(const HeadlessExport& job) {
   view->applyDisplay(job.display);
   view->resize(job.width, job.height);
   view->showResult(result);
+  if (!waitForViewJobs(*view)) throw InputError("--export-view", "view '" + job.view.toStdString() + "': its computation failed");
   const QString suffix = QFileInfo(job.out).suffix().toLower();
   if (suffix == "csv") {
     exportTableCsv(view->dataTable(), job.out);
@@ -44,6 +47,20 @@ void runHeadlessExport(const HeadlessExport& job) {
   }
   if (!view->figure()) throw InputError("--export-view", "view '" + job.view.toStdString() + "' has no figure; use --out FILE.csv");
   exportFigure(*view->figure(), job.out, job.width, job.height);
+}
+
+bool waitForViewJobs(ResultView& view) {
+  JobRunner* runner = view.ownJobs();
+  if (!runner || !runner->busy()) return true;
+  // The runner reports the end of its job through queued signals, so none can be missed between
+  // the busy() check and exec().
+  bool ok = false;
+  QEventLoop loop;
+  QObject::connect(runner, &JobRunner::delivered, &loop, [&] { ok = true; loop.quit(); });
+  QObject::connect(runner, &JobRunner::cancelled, &loop, &QEventLoop::quit);
+  QObject::connect(runner, &JobRunner::failed, &loop, &QEventLoop::quit);
+  loop.exec();
+  return ok;
 }
 
 }  // namespace finestra::ui

@@ -21,4 +21,9 @@ struct HeadlessExport {
 /// Throws InputError naming the file, key or view at fault.
 void runHeadlessExport(const HeadlessExport& job);
 
+/// Runs the event loop until the view's own job (if one runs) has ended: for exporting without a
+/// window and for tests, never inside the interactive application. Returns false when the job
+/// failed or was cancelled.
+bool waitForViewJobs(ResultView& view);
+
 }  // namespace finestra::ui

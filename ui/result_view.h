@@ -24,6 +24,7 @@ namespace finestra::ui {
 class ProjectDocument;
 class ComputeController;
 class JobBoard;
+class JobRunner;
 
 struct DisplaySettings {
   SpectralUnit unit = SpectralUnit::GHzDetuning;
@@ -54,6 +55,9 @@ public:
   virtual QCustomPlot* figure() { return nullptr; }
   /// The view's data as a table for CSV export.
   virtual Table dataTable() const = 0;
+  /// The runner of the view's own long jobs (computed from a result after showResult), or null.
+  /// Headless export and tests wait for it before reading the figure or the table.
+  virtual JobRunner* ownJobs() { return nullptr; }
 
 Q_SIGNALS:
   /// A measured peak was clicked: indices into project.measurements and its peaks.

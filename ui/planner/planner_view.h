@@ -38,6 +38,7 @@ public:
   QCustomPlot* figure() override { return mapPlot_; }
   Table dataTable() const override;
   JobRunner& runner() { return *runner_; }
+  JobRunner* ownJobs() override { return runner_; }
 
 protected:
   void showEvent(QShowEvent* event) override;

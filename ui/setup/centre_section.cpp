@@ -54,7 +54,10 @@ CentreSection::CentreSection(ProjectDocument& document, QWidget* parent)
   connect(preset_, &QComboBox::activated, this, [this](int index) {
     const std::string name = preset_->itemData(index).toString().toStdString();
     this->document().edit(tr("Choose centre %1").arg(QString::fromStdString(name)),
-                          [&](Project& p) { p.centre = CentreChoice{name, std::nullopt, {}}; });
+                          [&](Project& p) {
+                            p.centre = CentreChoice{};
+                            p.centre.preset = name;
+                          });
   });
   connect(isotope_, &QComboBox::activated, this, [this](int index) {
     const QString iso = isotope_->itemData(index).toString();
