@@ -14,8 +14,10 @@
 #include <QVBoxLayout>
 #include <cmath>
 #include <numbers>
+#include <spdlog/spdlog.h>
 
 #include "core/common/errors.h"
+#include "core/centre/parameter_table.h"
 #include "core/centre/presets.h"
 #include "core/project/field_semantics.h"
 #include "ui/setup_widgets.h"
@@ -24,6 +26,9 @@ namespace finestra::ui {
 namespace {
 
 constexpr double kStrainScale = 1e-6;  // strain spin boxes show units of 10⁻⁶
+// Parameter-table keys of the four E-strain boxes (ground magnitude, angle, excited magnitude, angle).
+constexpr std::array<const char*, 4> kEgStrainKeys{"strain.eg_ground.magnitude_GHz", "strain.eg_ground.angle_deg",
+                                                   "strain.eg_excited.magnitude_GHz", "strain.eg_excited.angle_deg"};
 const std::array<std::pair<int, int>, 6> kStrainIndex{{{0, 0}, {1, 1}, {2, 2}, {1, 2}, {2, 0}, {0, 1}}};
 const std::array<const char*, 6> kStrainNames{"xx", "yy", "zz", "yz", "zx", "xy"};
 
@@ -178,14 +183,15 @@ QWidget* SetupPanel::buildField() {
   auto* anglesPage = new QWidget;
   auto* anglesForm = new QFormLayout(anglesPage);
   anglesForm->setContentsMargins(0, 0, 0, 0);
-  magnitude_ = new SliderSpin(0, 12, 0.001, 3, " T");
-  polar_ = new SliderSpin(0, 180, 0.05, 2, "\u00b0");
-  azimuth_ = new SliderSpin(0, 360, 0.05, 2, "\u00b0");
+  magnitude_ = quantitySliderSpin("field.magnitude_T", 3, " T");
+  polar_ = quantitySliderSpin("field.polar_deg", 2, "\u00b0");
+  azimuth_ = quantitySliderSpin("field.azimuth_deg", 2, "\u00b0");
   anglesForm->addRow(tr("|B|"), magnitude_);
   anglesForm->addRow(tr("polar from lab z"), polar_);
   anglesForm->addRow(tr("azimuth from lab x"), azimuth_);
   fieldPages_->addWidget(anglesPage);
-  fieldVector_ = new Vec3Edit(-12, 12, 4);
+  fieldVector_ = new Vec3Edit(quantity("field.vector_T").minimum, quantity("field.vector_T").maximum, 4);
+  fieldVector_->setObjectName(QStringLiteral("field.vector_T"));
   fieldPages_->addWidget(fieldVector_);
   layout->addWidget(fieldPages_);
   fieldSummary_ = new QLabel;
@@ -227,7 +233,8 @@ QWidget* SetupPanel::buildStrain() {
   auto* layout = new QVBoxLayout;
   auto* grid = new QGridLayout;
   for (std::size_t i = 0; i < 6; ++i) {
-    strain_[i] = spinBox(-1e5, 1e5, 3, "");
+    strain_[i] = spinBox(0, 0, 3, "");
+    applyQuantity(strain_[i], "strain.crystal." + std::string(kStrainNames[i]), 1 / kStrainScale);
     grid->addWidget(new QLabel(QStringLiteral("\u03b5_%1").arg(kStrainNames[i])), static_cast<int>(i / 3) * 2, static_cast<int>(i % 3));
     grid->addWidget(strain_[i], static_cast<int>(i / 3) * 2 + 1, static_cast<int>(i % 3));
     connect(strain_[i], &QDoubleSpinBox::valueChanged, this, [this, i](double v) {
@@ -243,7 +250,8 @@ QWidget* SetupPanel::buildStrain() {
   auto* eg = new QFormLayout;
   const std::array<QString, 4> names{tr("ground |\u03b5_Eg| (GHz)"), tr("ground angle"), tr("excited |\u03b5_Eg| (GHz)"), tr("excited angle")};
   for (std::size_t i = 0; i < 4; ++i) {
-    egStrain_[i] = i % 2 == 0 ? spinBox(0, 1e4, 3, "") : spinBox(-360, 360, 2, "\u00b0");
+    egStrain_[i] = i % 2 == 0 ? spinBox(0, 0, 3, "") : spinBox(0, 0, 2, "\u00b0");
+    applyQuantity(egStrain_[i], kEgStrainKeys[i]);
     eg->addRow(names[i], egStrain_[i]);
     connect(egStrain_[i], &QDoubleSpinBox::valueChanged, this, [this, i](double v) {
       document_.edit(tr("E-type strain"), Change::Strain, [&](Project& p) {
@@ -259,7 +267,8 @@ QWidget* SetupPanel::buildStrain() {
 
 QWidget* SetupPanel::buildDetection() {
   auto* form = new QFormLayout;
-  temperature_ = spinBox(0, 400, 2, " K");
+  temperature_ = spinBox(0, 0, 2, " K");
+  applyQuantity(temperature_, "conditions.temperature_K");
   populations_ = new QComboBox;
   populations_->addItems({tr("thermal (Boltzmann)"), tr("equal")});
   collection_ = new Vec3Edit(-10, 10, 3);
@@ -268,7 +277,8 @@ QWidget* SetupPanel::buildDetection() {
   auto* analyserRow = new QHBoxLayout;
   analyserRow->addWidget(analyserOn_);
   analyserRow->addWidget(analyserAngle_);
-  broadening_ = spinBox(0, 1e4, 3, " GHz");
+  broadening_ = spinBox(0, 0, 3, " GHz");
+  applyQuantity(broadening_, "conditions.broadening_GHz");
   form->addRow(tr("Temperature"), temperature_);
   form->addRow(tr("Populations"), populations_);
   form->addRow(tr("Collection direction (lab)"), collection_);
@@ -324,7 +334,7 @@ QWidget* SetupPanel::buildSweep() {
   sweepFrom_ = spinBox(-1e4, 1e4, 3, "");
   sweepTo_ = spinBox(-1e4, 1e4, 3, "");
   sweepPoints_ = new QSpinBox;
-  sweepPoints_->setRange(2, 20000);
+  applyQuantity(sweepPoints_, "sweeps.points");
   sweepPoints_->setKeyboardTracking(false);
   form->addRow(tr("Sweep for the plots"), sweep_);
   form->addRow(tr("from"), sweepFrom_);
@@ -403,7 +413,9 @@ void SetupPanel::refreshCentre() {
     try {
       for (const auto& [name, values] : findPreset(p.centre.preset).isotopes)
         isotope_->addItem(QString::fromStdString(name), QString::fromStdString(name));
-    } catch (const InputError&) {
+    } catch (const InputError& e) {
+      // An unknown preset offers no isotopes; the parameter table below shows the same error.
+      spdlog::warn("no isotopes listed: {}", e.what());
     }
     isotope_->setCurrentIndex(std::max(0, isotope_->findData(QString::fromStdString(p.centre.isotope.value_or("")))));
   }

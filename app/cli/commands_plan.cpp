@@ -3,6 +3,7 @@
 #include <CLI/CLI.hpp>
 #include <iostream>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
@@ -90,8 +91,7 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
   try {
     model.emplace(makeModelSetup(project));
   } catch (const InputError& e) {
-    throw InputError(common.project + ": " + e.where(),
-                     std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, common.project);
   }
   const PlanRequest request = requestFrom(project, *model, o);
   const PlannerSettings& settings = request.settings;

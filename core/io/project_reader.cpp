@@ -2,6 +2,8 @@
 // non-finite numbers are errors naming the key path.
 #include <cmath>
 
+#include "core/centre/parameter_table.h"
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/json_reader.h"
 #include "core/io/project_file.h"
@@ -21,6 +23,7 @@ CentreChoice readCentre(const JsonObjectReader& r) {
     for (const auto& [key, value] : r.raw("parameters").items()) {
       if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
       c.overrides[key] = finiteNumber(value, params.keyPath(key));
+      requireInRange(quantity("centre.parameters." + key), c.overrides[key], params.keyPath(key));
     }
   }
   return c;
@@ -31,12 +34,20 @@ SampleSetting readSample(const JsonObjectReader& r) {
   return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
-// Largest field accepted (T), the limit CentreModel enforces; checked here too so that the message
-// names the key and file.
-constexpr double kMaxFieldT = 1000.0;
+// A number at `key` of `r`, checked against the table entry `tableKey` (message names the key).
+double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey) {
+  const double v = r.number(key);
+  requireInRange(quantity(tableKey), v, r.keyPath(key));
+  return v;
+}
 
+double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey, double fallback) {
+  return r.has(key) ? checkedNumber(r, key, tableKey) : fallback;
+}
+
+// The field limit CentreModel enforces, checked here so that the message names the key and file.
 void requireFieldInRange(double magnitudeT, const std::string& where) {
-  if (magnitudeT > kMaxFieldT) throw InputError(where, "field is too large for this model (at most 1000 T)");
+  requireInRange(quantity("field.magnitude_T"), magnitudeT, where);
 }
 
 FieldSetting readField(const JsonObjectReader& r) {
@@ -48,11 +59,9 @@ FieldSetting readField(const JsonObjectReader& r) {
   FieldSetting f;
   if (r.has("magnitude_T")) {
     f.form = FieldSetting::Form::Angles;
-    f.magnitudeT = r.number("magnitude_T");
-    if (f.magnitudeT < 0) throw InputError(r.keyPath("magnitude_T"), "must not be negative");
-    requireFieldInRange(f.magnitudeT, r.keyPath("magnitude_T"));
-    f.polarDeg = r.number("polar_deg", 0.0);
-    f.azimuthDeg = r.number("azimuth_deg", 0.0);
+    f.magnitudeT = checkedNumber(r, "magnitude_T", "field.magnitude_T");
+    f.polarDeg = checkedNumber(r, "polar_deg", "field.polar_deg", 0.0);
+    f.azimuthDeg = checkedNumber(r, "azimuth_deg", "field.azimuth_deg", 0.0);
   } else if (r.has("vector_lab_T")) {
     f.form = FieldSetting::Form::VectorLab;
     f.vector = r.vec3("vector_lab_T");
@@ -67,39 +76,42 @@ FieldSetting readField(const JsonObjectReader& r) {
 
 Mat3 readTensor(const JsonObjectReader& r) {
   r.allowOnly({"xx", "yy", "zz", "yz", "zx", "xy"});
-  return strainFromComponents(r.number("xx", 0), r.number("yy", 0), r.number("zz", 0), r.number("yz", 0),
-                              r.number("zx", 0), r.number("xy", 0));
+  auto component = [&](const char* key) {
+    return checkedNumber(r, key, ("strain.crystal." + std::string(key)).c_str(), 0.0);
+  };
+  return strainFromComponents(component("xx"), component("yy"), component("zz"), component("yz"), component("zx"),
+                              component("xy"));
 }
 
-EgStrain readEg(const JsonObjectReader& r) {
+// `tableKeyPrefix` is "strain.eg_ground" or "strain.eg_excited".
+EgStrain readEg(const JsonObjectReader& r, const std::string& tableKeyPrefix) {
   r.allowOnly({"magnitude_GHz", "angle_deg"});
-  EgStrain e{r.number("magnitude_GHz"), r.number("angle_deg", 0.0)};
-  if (e.magnitudeGHz < 0) throw InputError(r.keyPath("magnitude_GHz"), "must not be negative");
-  return e;
+  const std::string magnitudeKey = tableKeyPrefix + ".magnitude_GHz";
+  const std::string angleKey = tableKeyPrefix + ".angle_deg";
+  return {checkedNumber(r, "magnitude_GHz", magnitudeKey.c_str()),
+          checkedNumber(r, "angle_deg", angleKey.c_str(), 0.0)};
 }
 
 StrainSetting readStrain(const JsonObjectReader& r) {
   r.allowOnly({"crystal", "eg_ground", "eg_excited"});
   StrainSetting s;
   if (r.has("crystal")) s.crystal = readTensor(r.object("crystal"));
-  if (r.has("eg_ground")) s.extraGround = readEg(r.object("eg_ground"));
-  if (r.has("eg_excited")) s.extraExcited = readEg(r.object("eg_excited"));
+  if (r.has("eg_ground")) s.extraGround = readEg(r.object("eg_ground"), "strain.eg_ground");
+  if (r.has("eg_excited")) s.extraExcited = readEg(r.object("eg_excited"), "strain.eg_excited");
   return s;
 }
 
 DetectionConditions readConditions(const JsonObjectReader& r) {
   r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz"});
   DetectionConditions c;
-  c.temperatureK = r.number("temperature_K", c.temperatureK);
-  if (c.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  c.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", c.temperatureK);
   const std::string pop = r.string("populations", "thermal");
   if (pop == "thermal") c.populations = PopulationModel::Thermal;
   else if (pop == "equal") c.populations = PopulationModel::Equal;
   else throw InputError(r.keyPath("populations"), "expected \"thermal\" or \"equal\", found \"" + pop + "\"");
   if (r.has("collection_lab")) c.collectionLab = r.vec3("collection_lab");
   c.analyserLab = r.optionalVec3("analyser_lab");
-  c.extraBroadeningGHz = r.number("broadening_GHz", 0.0);
-  if (c.extraBroadeningGHz < 0) throw InputError(r.keyPath("broadening_GHz"), "must not be negative");
+  c.extraBroadeningGHz = checkedNumber(r, "broadening_GHz", "conditions.broadening_GHz", 0.0);
   return c;
 }
 
@@ -130,7 +142,7 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   s.from = r.number("from");
   s.to = r.number("to");
   s.points = r.integer("points", s.points);
-  if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
+  requireInRange(quantity("sweeps.points"), s.points, r.keyPath("points"));
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
   if (s.kind == SweepKind::Magnitude) {
@@ -157,7 +169,7 @@ MeasuredPeak readPeak(const JsonObjectReader& r) {
   try {
     (void)toAbsoluteGHz(p.position, p.unit, 1.0);
   } catch (const InputError& e) {
-    throw InputError(r.keyPath("position"), e.what());
+    throw InputError(r.keyPath("position"), e.message());
   }
   p.sigma = r.number("sigma");
   if (p.sigma <= 0) throw InputError(r.keyPath("sigma"), "uncertainty must be positive");
@@ -179,8 +191,7 @@ MeasurementSet readMeasurement(const JsonObjectReader& r) {
   r.allowOnly({"name", "temperature_K", "field", "peaks"});
   MeasurementSet m;
   m.name = r.string("name", "");
-  m.temperatureK = r.number("temperature_K", m.temperatureK);
-  if (m.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  m.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", m.temperatureK);
   m.field = readField(r.object("field"));
   const json& peaks = r.raw("peaks");
   if (!peaks.is_array()) throw InputError(r.keyPath("peaks"), "expected an array");
@@ -201,7 +212,7 @@ FitSettings readFit(const JsonObjectReader& r) {
     }
   }
   f.starts = r.integer("starts", f.starts);
-  if (f.starts < 1 || f.starts > 1000) throw InputError(r.keyPath("starts"), "must be between 1 and 1000");
+  requireInRange(quantity("fit.starts"), f.starts, r.keyPath("starts"));
   return f;
 }
 
@@ -217,12 +228,9 @@ std::vector<double> readNumbers(const json& arr, const std::string& path) {
 MagnetCalibration readMagnet(const JsonObjectReader& r) {
   r.allowOnly({"field_scale", "tilt_deg", "tilt_azimuth_deg"});
   MagnetCalibration m;
-  m.fieldScale = r.number("field_scale", m.fieldScale);
-  if (!(m.fieldScale > 0.1 && m.fieldScale < 10))
-    throw InputError(r.keyPath("field_scale"), "must lie between 0.1 and 10 (true / nominal field magnitude)");
-  m.tiltDeg = r.number("tilt_deg", m.tiltDeg);
-  if (std::abs(m.tiltDeg) > 90) throw InputError(r.keyPath("tilt_deg"), "must lie between -90 and 90 degrees");
-  m.tiltAzimuthDeg = r.number("tilt_azimuth_deg", m.tiltAzimuthDeg);
+  m.fieldScale = checkedNumber(r, "field_scale", "magnet.field_scale", m.fieldScale);
+  m.tiltDeg = checkedNumber(r, "tilt_deg", "magnet.tilt_deg", m.tiltDeg);
+  m.tiltAzimuthDeg = checkedNumber(r, "tilt_azimuth_deg", "magnet.tilt_azimuth_deg", m.tiltAzimuthDeg);
   return m;
 }
 
@@ -289,7 +297,7 @@ Project parseProject(const std::string& text, const std::string& origin) {
   try {
     return readDocument(doc);
   } catch (const InputError& e) {
-    throw InputError(origin + ": " + e.where(), std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, origin);
   } catch (const json::exception& e) {
     throw InputError(origin, e.what());
   }

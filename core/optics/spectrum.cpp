@@ -37,7 +37,7 @@ SpectrumCurve computeSpectrum(const CentreModel& model, const std::vector<Weight
     try {
       (void)toAbsoluteGHz(end, unit, model.zplGHz());
     } catch (const InputError& e) {
-      throw InputError("range", "spectrum range (from, to) end " + std::string(e.what()).substr(e.where().size() + 2) +
+      throw InputError("range", "spectrum range (from, to) end " + e.message() +
                                     " on unit " + std::string(spectralUnitKey(unit)));
     }
   }

@@ -5,6 +5,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
 #include "core/project/field_semantics.h"
@@ -132,8 +133,10 @@ void validatePlanRequest(const PlanRequest& request) {
     throw InputError("target_class", "class " + std::to_string(request.targetClass) +
                                          " is not among the project's selected classes");
   if (request.magnitudesT.empty()) throw InputError("magnitudes_T", "needs at least one magnitude");
-  for (double b : request.magnitudesT)
+  for (double b : request.magnitudesT) {
     if (!std::isfinite(b) || b <= 0) throw InputError("magnitudes_T", "every magnitude must be finite and > 0 T");
+    requireInRange(quantity("field.magnitude_T"), b, "magnitudes_T");
+  }
   for (const Constraint& c : request.constraints)
     if (std::isnan(c.min) || std::isnan(c.max) || c.min > c.max)
       throw InputError("constraints." + std::string(figureInfo(c.figure).key), "needs min <= max");

@@ -15,6 +15,7 @@
 #include <algorithm>
 #include <cmath>
 #include <map>
+#include <spdlog/spdlog.h>
 
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
@@ -329,7 +330,12 @@ void FitView::refreshParameters() {
   if (p) {
     try {
       start = initialFitState(*p);
-    } catch (const InputError&) {
+      parameterTable_->setToolTip({});
+    } catch (const InputError& e) {
+      // The start column stays empty; the reason is shown on the table and logged.
+      const QString reason = tr("No start values: %1").arg(QString::fromStdString(e.what()));
+      parameterTable_->setToolTip(reason);
+      spdlog::warn("{}", reason.toStdString());
     }
   }
   std::map<std::string, const FittedParameter*> fitted;
