@@ -4,6 +4,7 @@
 #include <sstream>
 
 #include "core/centre/parameter_table.h"
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
 #include "core/io/project_file.h"
@@ -18,8 +19,7 @@ auto inProject(const std::string& path, Body body) {
   try {
     return body();
   } catch (const InputError& e) {
-    const std::string what = e.what();
-    throw InputError(path + ": " + e.where(), what.substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, path);
   }
 }
 

@@ -7,7 +7,11 @@
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_thermal.h"
+#include "app/cli/commands_resonance.h"
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
+#include "core/common/version.h"
 
 using namespace finestra::cli;
 
@@ -24,6 +28,7 @@ void addProjectOptions(CLI::App* cmd, CommonOptions& options) {
 
 int main(int argc, char** argv) {
   CLI::App app{"finestra-cli: fine structure of group-IV vacancy centres in diamond"};
+  app.set_version_flag("--version", std::string(finestra::kVersion), "print the Finestra version and exit");
   app.require_subcommand(1);
   CommonOptions common;
   OutputFormat presetFormat = OutputFormat::Table;
@@ -46,7 +51,7 @@ int main(int argc, char** argv) {
   spec->add_option("--kind", spectrum.kind, "PL (emission) or PLE (excitation)");
   spec->add_option("--from", spectrum.from, "start of the range (unit of --unit)");
   spec->add_option("--to", spectrum.to, "end of the range (unit of --unit)");
-  spec->add_option("--points", spectrum.points, "number of points")->check(CLI::Range(2, 10000000));
+  spec->add_option("--points", spectrum.points, "number of points")->check(CLI::Range(finestra::quantity("spectrum.points").minimum, finestra::quantity("spectrum.points").maximum));
   auto* sw = app.add_subcommand("sweep", "levels and lines along a sweep defined in the project");
   addProjectOptions(sw, common);
   sw->add_option("--name", sweep.name, "sweep name (default: the first)");
@@ -62,6 +67,19 @@ int main(int argc, char** argv) {
   auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
   addProjectOptions(strainCmd, common);
   addStrainOptions(strainCmd, strainOptions);
+  MicrowaveOptions microwaveOptions;
+  auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
+  addProjectOptions(microwaveCmd, common);
+  addMicrowaveOptions(microwaveCmd, microwaveOptions);
+  LambdaOptions lambdaOptions;
+  auto* lambdaCmd = app.add_subcommand("lambda-systems", "Lambda systems: excited levels linked to two ground levels by allowed lines");
+  addProjectOptions(lambdaCmd, common);
+  addLambdaOptions(lambdaCmd, lambdaOptions);
+
+  ThermalOptions thermalOptions;
+  auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
+  addProjectOptions(thermalCmd, common);
+  addThermalOptions(thermalCmd, thermalOptions);
 
   try {
     app.parse(argc, argv);
@@ -77,6 +95,9 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*thermalCmd) return runThermal(common, thermalOptions);
+    if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
+    if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;

@@ -33,6 +33,14 @@ Limits centreLimits(Param p) {
     case Param::AParG: case Param::APerpG: case Param::AParU: case Param::APerpU: return {-1e5, 1e5, 1, 1};
     case Param::NuclearSpin: return {0, 4.5, 0.5, 0.5};
     case Param::GammaN: return {-1e3, 1e3, 0.1, 0.1};
+    // Phonon model constants. Powers of T are bounded as the thermal module requires.
+    case Param::PhononChiG: case Param::PhononChiU: return {0, 1e6, 1, 1};
+    case Param::HigherOrderCoefG: case Param::HigherOrderCoefU: return {0, 1e9, 1, 1};
+    case Param::HigherOrderPowerG: case Param::HigherOrderPowerU: return {0, 20, 0.1, 0.1};
+    case Param::ZplShiftCoef: return {-1e3, 1e3, 1e-3, 0.001};
+    case Param::ZplShiftPower: return {0, 20, 0.1, 0.1};
+    case Param::DebyeWaller: return {0, 1, 0.01, 0.01};
+    case Param::SidebandShiftMeV: case Param::SidebandFwhmMeV: return {0, 1000, 1, 0.1};
     case Param::Count: break;
   }
   throw std::logic_error("centreLimits: no limits for a centre parameter");
@@ -69,8 +77,15 @@ std::vector<QuantitySpec> buildTable() {
        "extra E-type strain of the excited manifold: magnitude"},
       {"strain.eg_excited.angle_deg", "eg_angle_u_deg", "deg", -360, 360, 10, 0.01,
        "extra E-type strain of the excited manifold: angle in the defect frame"},
-      {"conditions.temperature_K", "", "K", 0, 400, 1, 0.01, "sample temperature (sets thermal populations)"},
+      {"conditions.temperature_K", "", "K", 0, kMaxTemperatureK, 1, 0.01,
+       "sample temperature (sets thermal populations and phonon rates)"},
       {"conditions.broadening_GHz", "", "GHz", 0, 1e4, 0.1, 0.001, "extra line broadening added to the lifetime width"},
+      {"conditions.bath_t2star_s", "", "s", 1e-12, 1e6, 1e-9, 1e-9,
+       "spin dephasing time T2* set by the spin bath (limits the spin coherence)"},
+      {"centre.zpl_anchor.wavelength_nm", "", "nm", 100, 2000, 0.001, 0.001,
+       "measured wavelength of the anchor line (sets the ZPL)"},
+      {"centre.zpl_anchor.temperature_K", "", "K", 0, kMaxTemperatureK, 1, 0.1,
+       "temperature at which the anchor wavelength was measured"},
       {"sweeps.points", "", "1", 2, 1e6, 1, 1, "number of points of a sweep"},
       {"magnet.field_scale", "field_scale", "1", 0.1, 10, 1e-3, 0.001,
        "magnet calibration: true / nominal field magnitude"},
@@ -79,6 +94,9 @@ std::vector<QuantitySpec> buildTable() {
       {"magnet.tilt_azimuth_deg", "magnet_tilt_azimuth_deg", "deg", -360, 360, 10, 0.1,
        "magnet calibration: azimuth of the tilt"},
       {"fit.starts", "", "1", 1, 1000, 1, 1, "number of fit starts (the first from the project values)"},
+      {"planner.step_deg", "", "deg", 0.05, 90, 1, 0.25, "grid step of the planner map in polar and azimuth"},
+      {"planner.profile_points", "", "1", 2, 1e5, 1, 1, "number of field magnitudes of a planner profile"},
+      {"spectrum.points", "", "1", 2, 1e7, 1, 1, "number of points of a simulated spectrum"},
       {"zpl_offset_GHz", "zpl_offset_GHz", "GHz", -1e4, 1e4, 1, 0.01, "fit only: shift added to every line"},
   };
   t.insert(t.end(), project.begin(), project.end());

@@ -15,6 +15,8 @@ namespace finestra {
 /// magnet (the engine is tested to 30 T); past it the linear model means nothing and sums lose
 /// precision.
 inline constexpr double kMaxFieldT = 1000.0;
+/// Highest temperature (K) anywhere: sample conditions, temperature sweeps and scans, ZPL anchor.
+inline constexpr double kMaxTemperatureK = 1000.0;
 /// Largest absolute crystal strain component (dimensionless), same reasons as kMaxFieldT.
 inline constexpr double kMaxStrain = 1.0;
 

@@ -1,4 +1,4 @@
-// Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
+// Reading the version-1 project file (docs/architecture.md, Project file) strictly: unknown keys, wrong types and
 // non-finite numbers are errors naming the key path.
 #include <cmath>
 
@@ -13,27 +13,6 @@ namespace finestra {
 namespace {
 using nlohmann::json;
 
-CentreChoice readCentre(const JsonObjectReader& r) {
-  r.allowOnly({"preset", "isotope", "parameters"});
-  CentreChoice c;
-  c.preset = r.string("preset");
-  c.isotope = r.optionalString("isotope");
-  if (r.has("parameters")) {
-    const JsonObjectReader params = r.object("parameters");
-    for (const auto& [key, value] : r.raw("parameters").items()) {
-      if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
-      c.overrides[key] = finiteNumber(value, params.keyPath(key));
-      requireInRange(quantity("centre.parameters." + key), c.overrides[key], params.keyPath(key));
-    }
-  }
-  return c;
-}
-
-SampleSetting readSample(const JsonObjectReader& r) {
-  r.allowOnly({"normal", "in_plane_x"});
-  return {r.vec3("normal"), r.vec3("in_plane_x")};
-}
-
 // A number at `key` of `r`, checked against the table entry `tableKey` (message names the key).
 double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey) {
   const double v = r.number(key);
@@ -43,6 +22,44 @@ double checkedNumber(const JsonObjectReader& r, const char* key, const char* tab
 
 double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey, double fallback) {
   return r.has(key) ? checkedNumber(r, key, tableKey) : fallback;
+}
+
+ZplAnchor readZplAnchor(const JsonObjectReader& r) {
+  r.allowOnly({"line", "wavelength_nm", "medium", "temperature_K"});
+  ZplAnchor a;
+  const std::string line = r.string("line");
+  if (line.size() != 1 || line[0] < 'A' || line[0] > 'D') throw InputError(r.keyPath("line"), "expected \"A\", \"B\", \"C\" or \"D\"");
+  a.line = line[0];
+  a.wavelengthNm = checkedNumber(r, "wavelength_nm", "centre.zpl_anchor.wavelength_nm");
+  const std::string medium = r.string("medium", "vacuum");
+  if (medium != "vacuum" && medium != "air") throw InputError(r.keyPath("medium"), "expected \"vacuum\" or \"air\"");
+  a.air = medium == "air";
+  a.temperatureK = checkedNumber(r, "temperature_K", "centre.zpl_anchor.temperature_K", 4.0);
+  return a;
+}
+
+CentreChoice readCentre(const JsonObjectReader& r) {
+  r.allowOnly({"preset", "isotope", "parameters", "assumed", "zpl_anchor"});
+  CentreChoice c;
+  c.preset = r.string("preset");
+  c.isotope = r.optionalString("isotope");
+  for (const char* section : {"parameters", "assumed"}) {
+    if (!r.has(section)) continue;
+    const JsonObjectReader params = r.object(section);
+    auto& target = std::string(section) == "parameters" ? c.overrides : c.assumed;
+    for (const auto& [key, value] : r.raw(section).items()) {
+      if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
+      target[key] = finiteNumber(value, params.keyPath(key));
+      requireInRange(quantity("centre.parameters." + key), target[key], params.keyPath(key));
+    }
+  }
+  if (!r.isNull("zpl_anchor")) c.zplAnchor = readZplAnchor(r.object("zpl_anchor"));
+  return c;
+}
+
+SampleSetting readSample(const JsonObjectReader& r) {
+  r.allowOnly({"normal", "in_plane_x"});
+  return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
 // The field limit CentreModel enforces, checked here so that the message names the key and file.
@@ -102,7 +119,8 @@ StrainSetting readStrain(const JsonObjectReader& r) {
 }
 
 DetectionConditions readConditions(const JsonObjectReader& r) {
-  r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz"});
+  r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz", "phonon_sideband",
+               "bath_t2star_s"});
   DetectionConditions c;
   c.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", c.temperatureK);
   const std::string pop = r.string("populations", "thermal");
@@ -112,6 +130,8 @@ DetectionConditions readConditions(const JsonObjectReader& r) {
   if (r.has("collection_lab")) c.collectionLab = r.vec3("collection_lab");
   c.analyserLab = r.optionalVec3("analyser_lab");
   c.extraBroadeningGHz = checkedNumber(r, "broadening_GHz", "conditions.broadening_GHz", 0.0);
+  c.phononSideband = r.boolean("phonon_sideband", false);
+  if (!r.isNull("bath_t2star_s")) c.bathT2StarS = checkedNumber(r, "bath_t2star_s", "conditions.bath_t2star_s");
   return c;
 }
 
@@ -138,13 +158,18 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   if (kind == "magnitude") s.kind = SweepKind::Magnitude;
   else if (kind == "angle") s.kind = SweepKind::Angle;
   else if (kind == "strain") s.kind = SweepKind::Strain;
-  else throw InputError(r.keyPath("kind"), "expected \"magnitude\", \"angle\" or \"strain\"");
+  else if (kind == "temperature") s.kind = SweepKind::Temperature;
+  else throw InputError(r.keyPath("kind"), "expected \"magnitude\", \"angle\", \"strain\" or \"temperature\"");
   s.from = r.number("from");
   s.to = r.number("to");
   s.points = r.integer("points", s.points);
   requireInRange(quantity("sweeps.points"), s.points, r.keyPath("points"));
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
+  if (s.kind == SweepKind::Temperature) {
+    requireInRange(quantity("conditions.temperature_K"), s.from, r.keyPath("from"));
+    requireInRange(quantity("conditions.temperature_K"), s.to, r.keyPath("to"));
+  }
   if (s.kind == SweepKind::Magnitude) {
     requireFieldInRange(s.from, r.keyPath("from"));
     requireFieldInRange(s.to, r.keyPath("to"));

@@ -77,8 +77,7 @@ bool Constraint::holds(const ClassFigures& f) const {
 }
 
 std::vector<ReachableDirection> reachableDirections(const MagnetReach& reach) {
-  if (!std::isfinite(reach.stepDeg) || reach.stepDeg <= 0 || reach.stepDeg > 90)
-    throw InputError("reach.step_deg", "must lie in (0, 90] degrees");
+  requireInRange(quantity("planner.step_deg"), reach.stepDeg, "reach.step_deg");
   std::vector<ReachableDirection> out;
   if (reach.kind == ReachKind::Sphere) {
     const int rows = stepsIn(180.0, reach.stepDeg);

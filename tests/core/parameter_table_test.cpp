@@ -13,6 +13,8 @@
 #include "core/fit/fit_parameters.h"
 #include "core/io/project_file.h"
 #include "core/io/spectrum_csv.h"
+#include "core/planner/planner.h"
+#include "core/thermal/thermal_scan.h"
 
 namespace finestra {
 namespace {
@@ -104,7 +106,12 @@ TEST(ParameterTable, ReaderMessagesNameTheKeyAndTheRange) {
   const std::vector<Case> cases{
       {R"("centre": {"preset": "SiV-", "parameters": {"lambda_g_GHz": -5}})", "p.json: centre.parameters.lambda_g_GHz",
        "0 \u2026 100000 GHz"},
-      {R"("conditions": {"temperature_K": 500})", "p.json: conditions.temperature_K", "0 \u2026 400 K"},
+      {R"("conditions": {"temperature_K": 1001})", "p.json: conditions.temperature_K", "0 \u2026 1000 K"},
+      {R"("conditions": {"bath_t2star_s": 0})", "p.json: conditions.bath_t2star_s", "1e-12 \u2026 1000000 s"},
+      {R"("centre": {"preset": "SiV-", "zpl_anchor": {"line": "C", "wavelength_nm": 99}})",
+       "p.json: centre.zpl_anchor.wavelength_nm", "100 \u2026 2000 nm"},
+      {R"("centre": {"preset": "SiV-", "assumed": {"debye_waller": 1.5}})", "p.json: centre.assumed.debye_waller",
+       "0 \u2026 1"},
       {R"("field": {"magnitude_T": 1, "polar_deg": 181})", "p.json: field.polar_deg", "0 \u2026 180 deg"},
       {R"("magnet": {"tilt_deg": 91})", "p.json: magnet.tilt_deg", "-90 \u2026 90 deg"},
       {R"("strain": {"crystal": {"xy": 2}})", "p.json: strain.crystal.xy", "-1 \u2026 1"},
@@ -121,6 +128,32 @@ TEST(ParameterTable, ReaderMessagesNameTheKeyAndTheRange) {
     EXPECT_NE(e.message().find(c.range), std::string::npos) << e.message();
     EXPECT_EQ(std::string(e.what()), c.keyPath + ": " + e.message());
   }
+}
+
+// One temperature limit: conditions, temperature sweeps and thermal scans stop at the same value.
+TEST(ParameterTable, OneTemperatureLimit) {
+  EXPECT_EQ(quantity("conditions.temperature_K").maximum, kMaxTemperatureK);
+  EXPECT_EQ(quantity("centre.zpl_anchor.temperature_K").maximum, kMaxTemperatureK);
+  EXPECT_EQ(kMaxThermalTemperatureK, kMaxTemperatureK);
+  const InputError e = parseError(projectText(
+      R"("sweeps": [{"name": "t", "kind": "temperature", "from": 4, "to": 1200, "points": 10}])"));
+  EXPECT_EQ(e.keyPath(), "p.json: sweeps[0].to");
+  EXPECT_NE(e.message().find("0 \u2026 1000 K"), std::string::npos) << e.message();
+}
+
+// The planner grid step: the same range for a request file, the CLI option and the Python call.
+TEST(ParameterTable, PlannerStepHasOneRange) {
+  MagnetReach reach;
+  reach.stepDeg = 0.01;  // would be an 18000 x 36000 grid
+  try {
+    (void)reachableDirections(reach);
+    FAIL() << "a step below the table's minimum was accepted";
+  } catch (const InputError& e) {
+    EXPECT_EQ(e.keyPath(), "reach.step_deg");
+    EXPECT_NE(e.message().find("0.05 \u2026 90 deg"), std::string::npos) << e.message();
+  }
+  reach.stepDeg = 30;
+  EXPECT_FALSE(reachableDirections(reach).empty());
 }
 
 TEST(InputErrorParts, LocatedInKeepsTheMessageAndPrefixesTheKeyPath) {
