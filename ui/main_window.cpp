@@ -114,11 +114,7 @@ void MainWindow::buildMenus() {
   });
   file->addAction(tr("Import measured s&pectrum (CSV)\u2026"), this, [this] {
     const QString path = QFileDialog::getOpenFileName(this, tr("Import measured spectrum"), {}, tr("CSV (*.csv *.txt)"));
-    if (path.isEmpty()) return;
-    try {
-      importSpectrum(path);
-    } catch (const InputError&) {
-    }
+    if (!path.isEmpty()) importSpectrum(path);  // reports its own errors
   });
   file->addAction(tr("Remove measured spectrum"), this, [this] { document_->setMeasuredSpectrum(std::nullopt); });
   file->addSeparator();
@@ -244,16 +240,15 @@ bool MainWindow::importPeaks(const QString& path) {
 bool MainWindow::importSpectrum(const QString& path, std::optional<SpectralUnit> unit) {
   try {
     document_->setMeasuredSpectrum(readSpectrumCsv(path.toStdString(), unit));
+  } catch (const SpectrumUnitMissingError&) {
+    QStringList keys;
+    for (SpectralUnit u : allSpectralUnits()) keys << QString::fromStdString(std::string(spectralUnitKey(u)));
+    bool ok = false;
+    const QString key = QInputDialog::getItem(this, tr("Unit of the spectrum"),
+                                              tr("The file names no unit. Unit of the first column:"), keys, 0, false, &ok);
+    if (ok) return importSpectrum(path, parseSpectralUnit(key.toStdString(), "unit"));
+    return false;
   } catch (const InputError& e) {
-    if (!unit && QString::fromStdString(e.what()).contains("no unit was chosen")) {
-      QStringList keys;
-      for (SpectralUnit u : allSpectralUnits()) keys << QString::fromStdString(std::string(spectralUnitKey(u)));
-      bool ok = false;
-      const QString key = QInputDialog::getItem(this, tr("Unit of the spectrum"),
-                                                tr("The file names no unit. Unit of the first column:"), keys, 0, false, &ok);
-      if (ok) return importSpectrum(path, parseSpectralUnit(key.toStdString(), "unit"));
-      return false;
-    }
     spdlog::error("{}", e.what());
     QMessageBox::warning(this, tr("Cannot import spectrum"), QString::fromStdString(e.what()) + tr("\n\nNothing was changed."));
     return false;

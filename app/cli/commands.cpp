@@ -2,6 +2,7 @@
 
 #include <iostream>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
@@ -29,7 +30,7 @@ Loaded load(const std::string& path) {
   try {
     return {project, CentreModel(makeModelSetup(project))};
   } catch (const InputError& e) {
-    throw InputError(path + ": " + e.where(), std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, path);
   }
 }
 

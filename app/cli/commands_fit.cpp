@@ -3,6 +3,8 @@
 #include <iostream>
 #include <sstream>
 
+#include "core/centre/parameter_table.h"
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
 #include "core/io/project_file.h"
@@ -17,8 +19,7 @@ auto inProject(const std::string& path, Body body) {
   try {
     return body();
   } catch (const InputError& e) {
-    const std::string what = e.what();
-    throw InputError(path + ": " + e.where(), what.substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, path);
   }
 }
 
@@ -34,7 +35,8 @@ std::vector<std::string> splitNames(const std::string& text) {
 }  // namespace
 
 void addFitOptions(CLI::App* command, FitCommandOptions& o) {
-  command->add_option("--starts", o.starts, "number of starts (default: fit.starts of the project)")->check(CLI::Range(1, 1000));
+  command->add_option("--starts", o.starts, "number of starts (default: fit.starts of the project)")
+      ->check(CLI::Range(quantity("fit.starts").minimum, quantity("fit.starts").maximum));
   command->add_option("--seed", o.seed, "seed of the random starts (results are reproducible per seed)");
   command->add_option("--free", o.free, "comma-separated parameters to vary (default: fit.free of the project)");
   command->add_option("--write-project", o.writeProject, "write a copy of the project with the fitted values applied");

@@ -3,6 +3,8 @@
 #include <CLI/CLI.hpp>
 #include <iostream>
 
+#include "core/common/error_location.h"
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
@@ -80,8 +82,8 @@ void addPlanOptions(CLI::App* cmd, PlanOptions& o) {
   cmd->add_option("--best", o.best, "number of ranked settings to report");
   cmd->add_option("--direction-lab", o.directionLab, "profile: true field direction in the lab, x,y,z (default: the project's true field)")->delimiter(',');
   cmd->add_option("--max-T", o.maxT, "profile: largest magnitude (default: the first magnitude)");
-  cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(2, 100000));
-  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(0.05, 90.0));
+  cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(quantity("planner.profile_points").minimum, quantity("planner.profile_points").maximum));
+  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(quantity("planner.step_deg").minimum, quantity("planner.step_deg").maximum));
 }
 
 int runPlan(const CommonOptions& common, const PlanOptions& o) {
@@ -90,8 +92,7 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
   try {
     model.emplace(makeModelSetup(project));
   } catch (const InputError& e) {
-    throw InputError(common.project + ": " + e.where(),
-                     std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, common.project);
   }
   const PlanRequest request = requestFrom(project, *model, o);
   const PlannerSettings& settings = request.settings;

@@ -5,6 +5,7 @@
 #include <iostream>
 #include <optional>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/field_semantics.h"
@@ -35,7 +36,7 @@ Loaded load(const std::string& path) {
   try {
     l.model.emplace(makeModelSetup(l.project));
   } catch (const InputError& e) {
-    throw InputError(path + ": " + e.where(), std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, path);
   }
   return l;
 }

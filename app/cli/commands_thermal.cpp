@@ -3,6 +3,7 @@
 #include <CLI/CLI.hpp>
 #include <iostream>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
@@ -25,8 +26,7 @@ int runThermal(const CommonOptions& common, const ThermalOptions& o) {
     const CentreModel model(makeModelSetup(project));
     scan = thermalScan(model, project, temperatures);
   } catch (const InputError& e) {
-    throw InputError(common.project + ": " + e.where(),
-                     std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, common.project);
   }
   switch (common.format) {
     case OutputFormat::Json: std::cout << thermalJson(scan).dump(2) << '\n'; break;

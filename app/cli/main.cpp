@@ -9,6 +9,7 @@
 #include "app/cli/commands_plan.h"
 #include "app/cli/commands_thermal.h"
 #include "app/cli/commands_resonance.h"
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/common/version.h"
 
@@ -50,7 +51,7 @@ int main(int argc, char** argv) {
   spec->add_option("--kind", spectrum.kind, "PL (emission) or PLE (excitation)");
   spec->add_option("--from", spectrum.from, "start of the range (unit of --unit)");
   spec->add_option("--to", spectrum.to, "end of the range (unit of --unit)");
-  spec->add_option("--points", spectrum.points, "number of points")->check(CLI::Range(2, 10000000));
+  spec->add_option("--points", spectrum.points, "number of points")->check(CLI::Range(finestra::quantity("spectrum.points").minimum, finestra::quantity("spectrum.points").maximum));
   auto* sw = app.add_subcommand("sweep", "levels and lines along a sweep defined in the project");
   addProjectOptions(sw, common);
   sw->add_option("--name", sweep.name, "sweep name (default: the first)");

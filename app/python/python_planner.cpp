@@ -8,6 +8,7 @@
 #include "app/python/python_json.h"
 #include "app/python/python_progress.h"
 #include "app/python/python_project.h"
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/planner/plan_report.h"
 
@@ -41,7 +42,7 @@ PlanRequest requestFor(const PyProject& p, const CentreModel& model, const py::o
 
 py::dict planMap(const PyProject& p, const std::optional<double>& magnitudeT, double stepDeg,
                  const py::object& request, const py::object& callback) {
-  if (!(stepDeg >= 0.05 && stepDeg <= 90)) throw InputError("step_deg", "must be between 0.05 and 90 degrees");
+  requireInRange(quantity("planner.step_deg"), stepDeg, "step_deg");
   const CentreModel model = modelOf(p);
   PlanRequest planRequest = requestFor(p, model, request);
   if (magnitudeT) {

@@ -6,6 +6,7 @@
 #include <string>
 #include <utility>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
@@ -22,8 +23,8 @@ struct PyProject {
 template <typename Body>
 auto inProject(const PyProject& p, Body body) {
   const auto withOrigin = [&](const InputError& e) {
-    return std::make_pair(p.origin + ": " + e.where(),
-                          std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    const InputError located = locatedIn(e, p.origin);
+    return std::make_pair(located.keyPath(), located.message());
   };
   try {
     return body();

@@ -4,7 +4,9 @@
 #include <cmath>
 #include <numbers>
 #include <set>
+#include <stdexcept>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/project/field_semantics.h"
 
@@ -16,35 +18,27 @@ constexpr const char* kStrainNames[6] = {"strain_xx", "strain_yy", "strain_zz", 
 constexpr int kStrainRow[6] = {0, 1, 2, 1, 2, 0};
 constexpr int kStrainCol[6] = {0, 1, 2, 2, 0, 1};
 
+// The spec of a fit parameter: kind and index from here, unit and scale from the parameter table.
+// A name missing from the table is a programming error (no silent scale of 1).
+FitParameterSpec specFromTable(const std::string& name, FitParamKind kind, int index) {
+  const std::optional<QuantitySpec> q = findFitQuantity(name);
+  if (!q) throw std::logic_error("fit parameter '" + name + "' has no entry in the parameter table");
+  return {name, kind, index, q->unit == "1" ? "" : q->unit, q->fitScale};
+}
+
 std::vector<FitParameterSpec> buildCatalogue() {
   std::vector<FitParameterSpec> out;
-  for (int k = 0; k < 6; ++k) out.push_back({kStrainNames[k], FitParamKind::StrainComponent, k, "", 1e-6});
-  out.push_back({"field_scale", FitParamKind::FieldScale, 0, "", 1e-3});
-  out.push_back({"magnet_tilt_deg", FitParamKind::TiltAngle, 0, "deg", 0.5});
-  out.push_back({"magnet_tilt_azimuth_deg", FitParamKind::TiltAzimuth, 0, "deg", 10});
-  out.push_back({"zpl_offset_GHz", FitParamKind::ZplOffset, 0, "GHz", 1});
-  out.push_back({"eg_strain_g_GHz", FitParamKind::EgMagnitude, 0, "GHz", 1});
-  out.push_back({"eg_strain_u_GHz", FitParamKind::EgMagnitude, 1, "GHz", 1});
-  out.push_back({"eg_angle_g_deg", FitParamKind::EgAngle, 0, "deg", 10});
-  out.push_back({"eg_angle_u_deg", FitParamKind::EgAngle, 1, "deg", 10});
-  for (const ParamInfo& info : paramTable()) {
-    // A typical change: 1 % of the SiV value for couplings, 1 GHz-equivalent otherwise.
-    double scale = 1;
-    switch (info.id) {
-      case Param::ZplTHz: scale = 1e-3; break;  // 1 GHz
-      case Param::QG: case Param::QU: scale = 0.01; break;
-      case Param::GSpin: scale = 1e-3; break;
-      case Param::TperpG: case Param::TparG: case Param::DG: case Param::FG:
-      case Param::TperpU: case Param::TparU: case Param::DU: case Param::FU: scale = 0.01; break;
-      case Param::DipoleRatio: scale = 0.01; break;
-      case Param::LifetimeNs: scale = 0.1; break;
-      case Param::AParG: case Param::APerpG: case Param::AParU: case Param::APerpU: scale = 1; break;
-      case Param::NuclearSpin: scale = 0.5; break;
-      case Param::GammaN: scale = 0.1; break;
-      default: scale = 1; break;  // GHz quantities
-    }
-    out.push_back({std::string(info.key), FitParamKind::Centre, static_cast<int>(info.id), std::string(info.unit), scale});
-  }
+  for (int k = 0; k < 6; ++k) out.push_back(specFromTable(kStrainNames[k], FitParamKind::StrainComponent, k));
+  out.push_back(specFromTable("field_scale", FitParamKind::FieldScale, 0));
+  out.push_back(specFromTable("magnet_tilt_deg", FitParamKind::TiltAngle, 0));
+  out.push_back(specFromTable("magnet_tilt_azimuth_deg", FitParamKind::TiltAzimuth, 0));
+  out.push_back(specFromTable("zpl_offset_GHz", FitParamKind::ZplOffset, 0));
+  out.push_back(specFromTable("eg_strain_g_GHz", FitParamKind::EgMagnitude, 0));
+  out.push_back(specFromTable("eg_strain_u_GHz", FitParamKind::EgMagnitude, 1));
+  out.push_back(specFromTable("eg_angle_g_deg", FitParamKind::EgAngle, 0));
+  out.push_back(specFromTable("eg_angle_u_deg", FitParamKind::EgAngle, 1));
+  for (const ParamInfo& info : paramTable())
+    out.push_back(specFromTable(std::string(info.key), FitParamKind::Centre, static_cast<int>(info.id)));
   return out;
 }
 

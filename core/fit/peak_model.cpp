@@ -50,7 +50,7 @@ FitProblem prepareFitProblem(const Project& project, const std::optional<std::ve
         prepared.frequencyGHz = toAbsoluteGHz(p.position, p.unit, referenceGHz);
         prepared.sigmaGHz = p.sigma / std::abs(unitPerGHz(prepared.frequencyGHz, p.unit, referenceGHz));
       } catch (const InputError& e) {
-        throw InputError(key + ".position", e.what());
+        throw InputError(key + ".position", e.message());
       }
       if (!(prepared.sigmaGHz > 0) || !std::isfinite(prepared.sigmaGHz))
         throw InputError(key + ".sigma", "uncertainty must be positive and finite");

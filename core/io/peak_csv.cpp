@@ -109,7 +109,7 @@ std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::str
     try {
       toAbsoluteGHz(peak.position, peak.unit, 0.0);
     } catch (const InputError& e) {
-      throw InputError(where, std::string("position: ") + e.what());
+      throw InputError(where, "position: " + e.message());
     }
     if (const auto angle = row.optionalNumber(Analyser)) {
       const double a = *angle * std::numbers::pi / 180.0;

@@ -2,6 +2,8 @@
 // non-finite numbers are errors naming the key path.
 #include <cmath>
 
+#include "core/centre/parameter_table.h"
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/json_reader.h"
 #include "core/io/project_file.h"
@@ -11,21 +13,28 @@ namespace finestra {
 namespace {
 using nlohmann::json;
 
+// A number at `key` of `r`, checked against the table entry `tableKey` (message names the key).
+double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey) {
+  const double v = r.number(key);
+  requireInRange(quantity(tableKey), v, r.keyPath(key));
+  return v;
+}
+
+double checkedNumber(const JsonObjectReader& r, const char* key, const char* tableKey, double fallback) {
+  return r.has(key) ? checkedNumber(r, key, tableKey) : fallback;
+}
+
 ZplAnchor readZplAnchor(const JsonObjectReader& r) {
   r.allowOnly({"line", "wavelength_nm", "medium", "temperature_K"});
   ZplAnchor a;
   const std::string line = r.string("line");
   if (line.size() != 1 || line[0] < 'A' || line[0] > 'D') throw InputError(r.keyPath("line"), "expected \"A\", \"B\", \"C\" or \"D\"");
   a.line = line[0];
-  a.wavelengthNm = r.number("wavelength_nm");
-  if (!(a.wavelengthNm > 100 && a.wavelengthNm < 2000))
-    throw InputError(r.keyPath("wavelength_nm"), "must lie between 100 and 2000 nm");
+  a.wavelengthNm = checkedNumber(r, "wavelength_nm", "centre.zpl_anchor.wavelength_nm");
   const std::string medium = r.string("medium", "vacuum");
   if (medium != "vacuum" && medium != "air") throw InputError(r.keyPath("medium"), "expected \"vacuum\" or \"air\"");
   a.air = medium == "air";
-  a.temperatureK = r.number("temperature_K", 4.0);
-  if (!(a.temperatureK >= 0 && a.temperatureK <= 1000))
-    throw InputError(r.keyPath("temperature_K"), "must lie between 0 and 1000 K");
+  a.temperatureK = checkedNumber(r, "temperature_K", "centre.zpl_anchor.temperature_K", 4.0);
   return a;
 }
 
@@ -41,6 +50,7 @@ CentreChoice readCentre(const JsonObjectReader& r) {
     for (const auto& [key, value] : r.raw(section).items()) {
       if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
       target[key] = finiteNumber(value, params.keyPath(key));
+      requireInRange(quantity("centre.parameters." + key), target[key], params.keyPath(key));
     }
   }
   if (!r.isNull("zpl_anchor")) c.zplAnchor = readZplAnchor(r.object("zpl_anchor"));
@@ -52,12 +62,9 @@ SampleSetting readSample(const JsonObjectReader& r) {
   return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
-// Largest field accepted (T), the limit CentreModel enforces; checked here too so that the message
-// names the key and file.
-constexpr double kMaxFieldT = 1000.0;
-
+// The field limit CentreModel enforces, checked here so that the message names the key and file.
 void requireFieldInRange(double magnitudeT, const std::string& where) {
-  if (magnitudeT > kMaxFieldT) throw InputError(where, "field is too large for this model (at most 1000 T)");
+  requireInRange(quantity("field.magnitude_T"), magnitudeT, where);
 }
 
 FieldSetting readField(const JsonObjectReader& r) {
@@ -69,11 +76,9 @@ FieldSetting readField(const JsonObjectReader& r) {
   FieldSetting f;
   if (r.has("magnitude_T")) {
     f.form = FieldSetting::Form::Angles;
-    f.magnitudeT = r.number("magnitude_T");
-    if (f.magnitudeT < 0) throw InputError(r.keyPath("magnitude_T"), "must not be negative");
-    requireFieldInRange(f.magnitudeT, r.keyPath("magnitude_T"));
-    f.polarDeg = r.number("polar_deg", 0.0);
-    f.azimuthDeg = r.number("azimuth_deg", 0.0);
+    f.magnitudeT = checkedNumber(r, "magnitude_T", "field.magnitude_T");
+    f.polarDeg = checkedNumber(r, "polar_deg", "field.polar_deg", 0.0);
+    f.azimuthDeg = checkedNumber(r, "azimuth_deg", "field.azimuth_deg", 0.0);
   } else if (r.has("vector_lab_T")) {
     f.form = FieldSetting::Form::VectorLab;
     f.vector = r.vec3("vector_lab_T");
@@ -88,23 +93,28 @@ FieldSetting readField(const JsonObjectReader& r) {
 
 Mat3 readTensor(const JsonObjectReader& r) {
   r.allowOnly({"xx", "yy", "zz", "yz", "zx", "xy"});
-  return strainFromComponents(r.number("xx", 0), r.number("yy", 0), r.number("zz", 0), r.number("yz", 0),
-                              r.number("zx", 0), r.number("xy", 0));
+  auto component = [&](const char* key) {
+    return checkedNumber(r, key, ("strain.crystal." + std::string(key)).c_str(), 0.0);
+  };
+  return strainFromComponents(component("xx"), component("yy"), component("zz"), component("yz"), component("zx"),
+                              component("xy"));
 }
 
-EgStrain readEg(const JsonObjectReader& r) {
+// `tableKeyPrefix` is "strain.eg_ground" or "strain.eg_excited".
+EgStrain readEg(const JsonObjectReader& r, const std::string& tableKeyPrefix) {
   r.allowOnly({"magnitude_GHz", "angle_deg"});
-  EgStrain e{r.number("magnitude_GHz"), r.number("angle_deg", 0.0)};
-  if (e.magnitudeGHz < 0) throw InputError(r.keyPath("magnitude_GHz"), "must not be negative");
-  return e;
+  const std::string magnitudeKey = tableKeyPrefix + ".magnitude_GHz";
+  const std::string angleKey = tableKeyPrefix + ".angle_deg";
+  return {checkedNumber(r, "magnitude_GHz", magnitudeKey.c_str()),
+          checkedNumber(r, "angle_deg", angleKey.c_str(), 0.0)};
 }
 
 StrainSetting readStrain(const JsonObjectReader& r) {
   r.allowOnly({"crystal", "eg_ground", "eg_excited"});
   StrainSetting s;
   if (r.has("crystal")) s.crystal = readTensor(r.object("crystal"));
-  if (r.has("eg_ground")) s.extraGround = readEg(r.object("eg_ground"));
-  if (r.has("eg_excited")) s.extraExcited = readEg(r.object("eg_excited"));
+  if (r.has("eg_ground")) s.extraGround = readEg(r.object("eg_ground"), "strain.eg_ground");
+  if (r.has("eg_excited")) s.extraExcited = readEg(r.object("eg_excited"), "strain.eg_excited");
   return s;
 }
 
@@ -112,22 +122,16 @@ DetectionConditions readConditions(const JsonObjectReader& r) {
   r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz", "phonon_sideband",
                "bath_t2star_s"});
   DetectionConditions c;
-  c.temperatureK = r.number("temperature_K", c.temperatureK);
-  if (c.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  c.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", c.temperatureK);
   const std::string pop = r.string("populations", "thermal");
   if (pop == "thermal") c.populations = PopulationModel::Thermal;
   else if (pop == "equal") c.populations = PopulationModel::Equal;
   else throw InputError(r.keyPath("populations"), "expected \"thermal\" or \"equal\", found \"" + pop + "\"");
   if (r.has("collection_lab")) c.collectionLab = r.vec3("collection_lab");
   c.analyserLab = r.optionalVec3("analyser_lab");
-  c.extraBroadeningGHz = r.number("broadening_GHz", 0.0);
-  if (c.extraBroadeningGHz < 0) throw InputError(r.keyPath("broadening_GHz"), "must not be negative");
+  c.extraBroadeningGHz = checkedNumber(r, "broadening_GHz", "conditions.broadening_GHz", 0.0);
   c.phononSideband = r.boolean("phonon_sideband", false);
-  if (!r.isNull("bath_t2star_s")) {
-    c.bathT2StarS = r.number("bath_t2star_s");
-    if (!(*c.bathT2StarS > 0 && *c.bathT2StarS <= 1e6))
-      throw InputError(r.keyPath("bath_t2star_s"), "must be a positive number of seconds, at most 1e6");
-  }
+  if (!r.isNull("bath_t2star_s")) c.bathT2StarS = checkedNumber(r, "bath_t2star_s", "conditions.bath_t2star_s");
   return c;
 }
 
@@ -159,11 +163,13 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   s.from = r.number("from");
   s.to = r.number("to");
   s.points = r.integer("points", s.points);
-  if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
+  requireInRange(quantity("sweeps.points"), s.points, r.keyPath("points"));
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
-  if (s.kind == SweepKind::Temperature && !(s.from >= 0 && s.to >= 0 && s.from <= 1000 && s.to <= 1000))
-    throw InputError(r.keyPath("from"), "temperatures must lie between 0 and 1000 K");
+  if (s.kind == SweepKind::Temperature) {
+    requireInRange(quantity("conditions.temperature_K"), s.from, r.keyPath("from"));
+    requireInRange(quantity("conditions.temperature_K"), s.to, r.keyPath("to"));
+  }
   if (s.kind == SweepKind::Magnitude) {
     requireFieldInRange(s.from, r.keyPath("from"));
     requireFieldInRange(s.to, r.keyPath("to"));
@@ -188,7 +194,7 @@ MeasuredPeak readPeak(const JsonObjectReader& r) {
   try {
     (void)toAbsoluteGHz(p.position, p.unit, 1.0);
   } catch (const InputError& e) {
-    throw InputError(r.keyPath("position"), e.what());
+    throw InputError(r.keyPath("position"), e.message());
   }
   p.sigma = r.number("sigma");
   if (p.sigma <= 0) throw InputError(r.keyPath("sigma"), "uncertainty must be positive");
@@ -210,8 +216,7 @@ MeasurementSet readMeasurement(const JsonObjectReader& r) {
   r.allowOnly({"name", "temperature_K", "field", "peaks"});
   MeasurementSet m;
   m.name = r.string("name", "");
-  m.temperatureK = r.number("temperature_K", m.temperatureK);
-  if (m.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
+  m.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", m.temperatureK);
   m.field = readField(r.object("field"));
   const json& peaks = r.raw("peaks");
   if (!peaks.is_array()) throw InputError(r.keyPath("peaks"), "expected an array");
@@ -232,7 +237,7 @@ FitSettings readFit(const JsonObjectReader& r) {
     }
   }
   f.starts = r.integer("starts", f.starts);
-  if (f.starts < 1 || f.starts > 1000) throw InputError(r.keyPath("starts"), "must be between 1 and 1000");
+  requireInRange(quantity("fit.starts"), f.starts, r.keyPath("starts"));
   return f;
 }
 
@@ -248,12 +253,9 @@ std::vector<double> readNumbers(const json& arr, const std::string& path) {
 MagnetCalibration readMagnet(const JsonObjectReader& r) {
   r.allowOnly({"field_scale", "tilt_deg", "tilt_azimuth_deg"});
   MagnetCalibration m;
-  m.fieldScale = r.number("field_scale", m.fieldScale);
-  if (!(m.fieldScale > 0.1 && m.fieldScale < 10))
-    throw InputError(r.keyPath("field_scale"), "must lie between 0.1 and 10 (true / nominal field magnitude)");
-  m.tiltDeg = r.number("tilt_deg", m.tiltDeg);
-  if (std::abs(m.tiltDeg) > 90) throw InputError(r.keyPath("tilt_deg"), "must lie between -90 and 90 degrees");
-  m.tiltAzimuthDeg = r.number("tilt_azimuth_deg", m.tiltAzimuthDeg);
+  m.fieldScale = checkedNumber(r, "field_scale", "magnet.field_scale", m.fieldScale);
+  m.tiltDeg = checkedNumber(r, "tilt_deg", "magnet.tilt_deg", m.tiltDeg);
+  m.tiltAzimuthDeg = checkedNumber(r, "tilt_azimuth_deg", "magnet.tilt_azimuth_deg", m.tiltAzimuthDeg);
   return m;
 }
 
@@ -320,7 +322,7 @@ Project parseProject(const std::string& text, const std::string& origin) {
   try {
     return readDocument(doc);
   } catch (const InputError& e) {
-    throw InputError(origin + ": " + e.where(), std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, origin);
   } catch (const json::exception& e) {
     throw InputError(origin, e.what());
   }

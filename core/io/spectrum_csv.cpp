@@ -48,7 +48,7 @@ MeasuredSpectrum parseSpectrumCsv(const std::string& text, const std::string& or
                                     std::string(spectralUnitKey(*chosenUnit)) + "')");
       if (headerUnit) unit = headerUnit;
       if (!unit)
-        throw InputError(where, "header '" + cells[0] +
+        throw SpectrumUnitMissingError(where, "header '" + cells[0] +
                                     "' names no spectral unit (use GHz, GHz_detuning, THz, nm_vac, nm_air, meV or "
                                     "cm-1) and no unit was chosen on import");
       continue;
@@ -56,7 +56,7 @@ MeasuredSpectrum parseSpectrumCsv(const std::string& text, const std::string& or
     firstContentLine = false;
     if (!x) throw InputError(where, "position '" + cells[0] + "' is not a number");
     if (!y) throw InputError(where, "signal '" + cells[1] + "' is not a number");
-    if (!unit) throw InputError(where, "the file has no header naming the unit and no unit was chosen on import");
+    if (!unit) throw SpectrumUnitMissingError(where, "the file has no header naming the unit and no unit was chosen on import");
     if (*unit != SpectralUnit::GHzDetuning && *x <= 0)
       throw InputError(where, "position must be positive on " + std::string(spectralUnitKey(*unit)));
     out.position.push_back(*x);

@@ -8,10 +8,19 @@
 
 #include "core/project/measured_spectrum.h"
 
+#include "core/common/errors.h"
+
 namespace finestra {
 
+/// The file names no unit and none was chosen: the caller may ask the user for one and read again.
+class SpectrumUnitMissingError : public InputError {
+public:
+  using InputError::InputError;
+};
+
 /// Parses CSV text. `chosenUnit` is used when the header names no unit (and must agree with the
-/// header when both are given). Errors "origin:line: ..." as InputError.
+/// header when both are given). Errors "origin:line: ..." as InputError;
+/// SpectrumUnitMissingError when no unit is known.
 MeasuredSpectrum parseSpectrumCsv(const std::string& text, const std::string& origin,
                                   std::optional<SpectralUnit> chosenUnit = std::nullopt);
 MeasuredSpectrum readSpectrumCsv(const std::string& path, std::optional<SpectralUnit> chosenUnit = std::nullopt);

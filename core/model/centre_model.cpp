@@ -5,6 +5,7 @@
 #include <numbers>
 #include <sstream>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/model/dipole.h"
 #include "core/model/tracking.h"
@@ -29,11 +30,6 @@ void validateConditions(const DetectionConditions& c) {
   if (c.analyserLab && (!c.analyserLab->allFinite() || c.analyserLab->norm() < 1e-12))
     throw InputError("conditions.analyser_lab", "must be a non-zero finite vector or null");
 }
-
-// Largest field and strain the model accepts. Far beyond any laboratory value (the engine is
-// tested to 30 T and 1e-2); past them the linear model means nothing and sums lose all precision.
-constexpr double kMaxFieldT = 1000.0;
-constexpr double kMaxStrain = 1.0;
 
 std::string shortNumber(double x) {
   std::ostringstream out;
@@ -103,7 +99,7 @@ StrainTerms CentreModel::strainFor(Manifold m, int cls, const Mat3* strainOverri
 ManifoldEigen CentreModel::levels(Manifold m, int cls, const Vec3& fieldCrystal, const Mat3* strainOverride) const {
   if (!(fieldCrystal.norm() <= kMaxFieldT))
     throw InputError("field", "magnitude " + shortNumber(fieldCrystal.norm()) +
-                                  " T is too large for this model (at most 1000 T)");
+                                  " T is too large for this model (at most " + shortNumber(kMaxFieldT) + " T)");
   if (strainOverride && !(strainOverride->cwiseAbs().maxCoeff() <= kMaxStrain))
     throw InputError("strain", "a strain component is not finite or above 1 (100 % strain)");
   ManifoldEigen out = diagonalise(manifold(m), strainFor(m, cls, strainOverride), defectFrame(cls) * fieldCrystal);

@@ -4,6 +4,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/thermal/level_widths.h"
 #include "core/thermal/sideband.h"
@@ -52,13 +53,14 @@ double spectrumDensity(const CentreModel& model, const std::vector<WeightedLine>
 SpectrumCurve computeSpectrum(const CentreModel& model, const std::vector<WeightedLine>& lines, SpectralUnit unit,
                               double from, double to, int points) {
   if (points < 2) throw InputError("points", "a spectrum needs at least 2 points");
+  requireInRange(quantity("spectrum.points"), points, "points");
   if (!std::isfinite(from) || !std::isfinite(to) || from == to)
     throw InputError("range", "spectrum range (from, to) must be two different finite numbers");
   for (double end : {from, to}) {
     try {
       (void)toAbsoluteGHz(end, unit, model.zplGHz());
     } catch (const InputError& e) {
-      throw InputError("range", "spectrum range (from, to) end " + std::string(e.what()).substr(e.where().size() + 2) +
+      throw InputError("range", "spectrum range (from, to) end " + e.message() +
                                     " on unit " + std::string(spectralUnitKey(unit)));
     }
   }

@@ -3,6 +3,7 @@
 #include <cmath>
 #include <limits>
 
+#include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/io/json_reader.h"
 #include "core/io/text_file.h"
@@ -110,8 +111,7 @@ PlanRequest parsePlanRequest(const std::string& text, const std::string& origin,
     request.bestCount = r.integer("best", request.bestCount);
     request.settings.gapScanSamples = r.integer("gap_scan_samples", request.settings.gapScanSamples);
   } catch (const InputError& e) {
-    const std::string where = e.where().empty() ? origin : origin + ": " + e.where();
-    throw InputError(where, std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
+    throw locatedIn(e, origin);
   }
   request.settings.magnitudeT = request.magnitudesT.empty() ? 0.0 : request.magnitudesT.front();
   return request;

@@ -5,6 +5,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
 #include "core/project/field_semantics.h"
@@ -76,8 +77,7 @@ bool Constraint::holds(const ClassFigures& f) const {
 }
 
 std::vector<ReachableDirection> reachableDirections(const MagnetReach& reach) {
-  if (!std::isfinite(reach.stepDeg) || reach.stepDeg <= 0 || reach.stepDeg > 90)
-    throw InputError("reach.step_deg", "must lie in (0, 90] degrees");
+  requireInRange(quantity("planner.step_deg"), reach.stepDeg, "reach.step_deg");
   std::vector<ReachableDirection> out;
   if (reach.kind == ReachKind::Sphere) {
     const int rows = stepsIn(180.0, reach.stepDeg);
@@ -132,8 +132,10 @@ void validatePlanRequest(const PlanRequest& request) {
     throw InputError("target_class", "class " + std::to_string(request.targetClass) +
                                          " is not among the project's selected classes");
   if (request.magnitudesT.empty()) throw InputError("magnitudes_T", "needs at least one magnitude");
-  for (double b : request.magnitudesT)
+  for (double b : request.magnitudesT) {
     if (!std::isfinite(b) || b <= 0) throw InputError("magnitudes_T", "every magnitude must be finite and > 0 T");
+    requireInRange(quantity("field.magnitude_T"), b, "magnitudes_T");
+  }
   for (const Constraint& c : request.constraints)
     if (std::isnan(c.min) || std::isnan(c.max) || c.min > c.max)
       throw InputError("constraints." + std::string(figureInfo(c.figure).key), "needs min <= max");

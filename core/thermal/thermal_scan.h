@@ -5,13 +5,14 @@
 #include <string>
 #include <vector>
 
+#include "core/centre/parameter_table.h"
 #include "core/project/project.h"
 #include "core/thermal/level_widths.h"
 
 namespace finestra {
 
 inline constexpr std::size_t kMaxThermalTemperatures = 10000;
-inline constexpr double kMaxThermalTemperatureK = 1000.0;
+inline constexpr double kMaxThermalTemperatureK = kMaxTemperatureK;  // one limit for every temperature
 
 /// Throws InputError naming `key` for an empty list, more than kMaxThermalTemperatures entries, or
 /// a temperature outside 0..kMaxThermalTemperatureK K.

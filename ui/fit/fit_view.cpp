@@ -15,7 +15,9 @@
 #include <algorithm>
 #include <cmath>
 #include <map>
+#include <spdlog/spdlog.h>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
 #include "core/units/spectral_units.h"
@@ -87,7 +89,7 @@ QString strongestCorrelation(const FitResult& r) {
 FitView::FitView(const ViewContext& viewContext, QWidget* parent)
     : ResultView(viewContext, parent), runner_(new JobRunner(tr("fit"), viewContext.jobs, this)) {
   startsBox_ = new QSpinBox(this);
-  startsBox_->setRange(1, 1000);
+  startsBox_->setRange(static_cast<int>(quantity("fit.starts").minimum), static_cast<int>(quantity("fit.starts").maximum));
   startsBox_->setToolTip(tr("Starting points of the fit: the first is the project as it is, the others are scattered\n"
                             "(strain signs flipped) to escape the symmetric look-alike solutions. Saved in the project."));
   fitButton_ = new QPushButton(tr("Fit"), this);
@@ -336,7 +338,12 @@ void FitView::refreshParameters() {
   if (p) {
     try {
       start = initialFitState(*p);
-    } catch (const InputError&) {
+      parameterTable_->setToolTip({});
+    } catch (const InputError& e) {
+      // The start column stays empty; the reason is shown on the table and logged.
+      const QString reason = tr("No start values: %1").arg(QString::fromStdString(e.what()));
+      parameterTable_->setToolTip(reason);
+      spdlog::warn("{}", reason.toStdString());
     }
   }
   std::map<std::string, const FittedParameter*> fitted;

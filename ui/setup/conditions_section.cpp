@@ -15,7 +15,8 @@ namespace finestra::ui {
 ConditionsSection::ConditionsSection(ProjectDocument& document, QWidget* parent)
     : SetupSection(tr("Detection"), document, parent) {
   auto* form = new QFormLayout(this);
-  temperature_ = makeSpinBox(0, 400, 2, " K");
+  temperature_ = makeSpinBox(0, 0, 2, " K");
+  applyQuantity(temperature_, "conditions.temperature_K");
   populations_ = new QComboBox;
   populations_->addItems({tr("thermal (Boltzmann)"), tr("equal")});
   collection_ = new Vec3Edit(-10, 10, 3);
@@ -24,7 +25,8 @@ ConditionsSection::ConditionsSection(ProjectDocument& document, QWidget* parent)
   auto* analyserRow = new QHBoxLayout;
   analyserRow->addWidget(analyserOn_);
   analyserRow->addWidget(analyserAngle_);
-  broadening_ = makeSpinBox(0, 1e4, 3, " GHz");
+  broadening_ = makeSpinBox(0, 0, 3, " GHz");
+  applyQuantity(broadening_, "conditions.broadening_GHz");
   form->addRow(tr("Temperature"), temperature_);
   form->addRow(tr("Populations"), populations_);
   form->addRow(tr("Collection direction (lab)"), collection_);

@@ -2,7 +2,10 @@
 
 #include <QHBoxLayout>
 #include <QSignalBlocker>
+#include <algorithm>
 #include <cmath>
+
+#include "core/centre/parameter_table.h"
 
 namespace finestra::ui {
 
@@ -75,6 +78,37 @@ void Vec3Edit::setValue(const Vec3& v) {
     const QSignalBlocker block(spins_[static_cast<std::size_t>(i)]);
     spins_[static_cast<std::size_t>(i)]->setValue(v[i]);
   }
+}
+
+namespace {
+QString toolTipOf(const QuantitySpec& q) {
+  return QString::fromStdString(q.help + " (" + rangeText(q) + ")");
+}
+}  // namespace
+
+void applyQuantity(QDoubleSpinBox* spin, std::string_view key, double displayScale) {
+  const QuantitySpec& q = quantity(key);
+  spin->setRange(q.minimum * displayScale, q.maximum * displayScale);
+  spin->setSingleStep(q.guiStep * displayScale);
+  spin->setToolTip(toolTipOf(q));
+  spin->setObjectName(QString::fromStdString(q.key));
+}
+
+void applyQuantity(QSpinBox* spin, std::string_view key) {
+  const QuantitySpec& q = quantity(key);
+  spin->setRange(static_cast<int>(q.minimum), static_cast<int>(q.maximum));
+  spin->setSingleStep(std::max(1, static_cast<int>(q.guiStep)));
+  spin->setToolTip(toolTipOf(q));
+  spin->setObjectName(QString::fromStdString(q.key));
+}
+
+SliderSpin* quantitySliderSpin(std::string_view key, int decimals, const QString& suffix) {
+  const QuantitySpec& q = quantity(key);
+  auto* s = new SliderSpin(q.minimum, q.maximum, q.guiStep, decimals, suffix);
+  s->setToolTip(toolTipOf(q));
+  s->spin()->setToolTip(toolTipOf(q));
+  s->spin()->setObjectName(QString::fromStdString(q.key));
+  return s;
 }
 
 }  // namespace finestra::ui

@@ -4,8 +4,10 @@
 // that reports only finished entries.
 #include <QDoubleSpinBox>
 #include <QSlider>
+#include <QSpinBox>
 #include <QWidget>
 #include <array>
+#include <string_view>
 
 #include "core/common/types.h"
 
@@ -50,5 +52,14 @@ Q_SIGNALS:
 private:
   std::array<QDoubleSpinBox*, 3> spins_{};
 };
+
+/// Range, single step and tooltip of `spin` from the parameter table entry `key` (the same range the
+/// project reader accepts); `displayScale` is the shown value per stored value (1e6 for strain shown
+/// in units of 1e-6). The spin box's object name becomes the key.
+void applyQuantity(QDoubleSpinBox* spin, std::string_view key, double displayScale = 1);
+/// The same for a whole-number spin box.
+void applyQuantity(QSpinBox* spin, std::string_view key);
+/// A slider + spin box whose range, step and tooltip come from the parameter table entry `key`.
+SliderSpin* quantitySliderSpin(std::string_view key, int decimals, const QString& suffix);
 
 }  // namespace finestra::ui

@@ -27,7 +27,7 @@ SweepSection::SweepSection(ProjectDocument& document, QWidget* parent)
   from_ = makeSpinBox(-1e4, 1e4, 3, "");
   to_ = makeSpinBox(-1e4, 1e4, 3, "");
   points_ = new QSpinBox;
-  points_->setRange(2, 20000);
+  applyQuantity(points_, "sweeps.points");
   points_->setKeyboardTracking(false);
   form->addRow(tr("Sweep for the plots"), sweep_);
   form->addRow(tr("from"), from_);
