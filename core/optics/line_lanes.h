@@ -34,6 +34,12 @@ unsigned lineLanesAvx2(const LaneClassInput& in, const double* bx, const double*
                        double* const* out);
 unsigned lineLanesAvx512(const LaneClassInput& in, const double* bx, const double* by, const double* bz,
                          double* const* out);
+/// E2 − E1 (the gap between the lower and the upper pair of levels, quarticMiddleGap) of one
+/// manifold at `kLanes` fields into gaps[l]; the returned bits mark lanes to recompute in scalar.
+unsigned middleGapLanesAvx2(const LanePauliForm& form, const double* bx, const double* by, const double* bz,
+                            double* gaps);
+unsigned middleGapLanesAvx512(const LanePauliForm& form, const double* bx, const double* by, const double* bz,
+                              double* gaps);
 constexpr int kLanesAvx2 = 4;
 constexpr int kLanesAvx512 = 8;
 

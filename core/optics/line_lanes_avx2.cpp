@@ -10,4 +10,9 @@ unsigned lineLanesAvx2(const LaneClassInput& in, const double* bx, const double*
   return lineLanes(in, bx, by, bz, out);
 }
 
+unsigned middleGapLanesAvx2(const LanePauliForm& form, const double* bx, const double* by, const double* bz,
+                        double* gaps) {
+  return middleGapLanes(form, bx, by, bz, gaps);
+}
+
 }  // namespace finestra

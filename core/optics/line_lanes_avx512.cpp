@@ -10,4 +10,9 @@ unsigned lineLanesAvx512(const LaneClassInput& in, const double* bx, const doubl
   return lineLanes(in, bx, by, bz, out);
 }
 
+unsigned middleGapLanesAvx512(const LanePauliForm& form, const double* bx, const double* by, const double* bz,
+                        double* gaps) {
+  return middleGapLanes(form, bx, by, bz, gaps);
+}
+
 }  // namespace finestra

@@ -50,27 +50,53 @@ Lanes largestResolventRoot(Lanes a2, Lanes a1, Lanes a0, LaneMask& failed) {
   return y;
 }
 
-// Eigenpairs of one manifold at the lanes' fields; `failed` gains the lanes the scalar path must do.
-void solveManifold(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, ManifoldLanes& out, LaneMask& failed) {
+/// The resolvent of one manifold at the lanes' fields (linear4.cpp): Pauli components v, the
+/// depressed quartic x⁴ + p x² + q x + r of K = H − e0, S = tr(K²)/4 and the resolvent's roots
+/// y1 ≥ y2 ≥ y3 ≥ 0.
+struct ResolventLanes {
   Lanes v[8];
+  Lanes S, p, q, r;
+  Lanes y1, y2, y3;
+};
+
+void resolventAt(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, ResolventLanes& out, LaneMask& failed) {
+  Lanes* v = out.v;
   for (int k = 0; k < 8; ++k)
     v[k] = splat(f.value[k]) + splat(f.gradient[k][0]) * bx + splat(f.gradient[k][1]) * by +
            splat(f.gradient[k][2]) * bz;
-  const Lanes e0 = v[0], ox = v[1], oy = v[2], oz = v[3], sx = v[4], sy = v[5], sz = v[6], c = v[7];
-  // The depressed quartic x⁴ + p x² + q x + r of K = H − e0 and its resolvent (linear4.cpp).
+  const Lanes ox = v[1], oy = v[2], oz = v[3], sx = v[4], sy = v[5], sz = v[6], c = v[7];
   const Lanes o2 = ox * ox + oy * oy + oz * oz, s2 = sx * sx + sy * sy + sz * sz, c2 = c * c;
   const Lanes S = o2 + s2 + c2;
   const Lanes P = o2 * s2 + c2 * (oy * oy + sz * sz);
   const Lanes p = splat(-2.0) * S, q = splat(-8.0) * c * oy * sz, r = S * S - splat(4.0) * P;
   const Lanes a1 = splat(16.0) * P;
   const Lanes y1 = largestResolventRoot(splat(2.0) * p, a1, -(q * q), failed);
-  failed = failed | notGreater(y1, splat(0.0));
   // The two smaller resolvent roots from Vieta's relations (y1 y2 y3 = q², Σ y_i y_j = 16P).
   const Lanes safeY1 = max(y1, splat(1e-300));
   const Lanes product = q * q / safeY1;
   const Lanes sum = max((a1 - product) / safeY1, splat(0.0));
   const Lanes larger = splat(0.5) * (sum + sqrt(max(sum * sum - splat(4.0) * product, splat(0.0))));
   const Lanes smaller = select(larger > splat(0.0), product / max(larger, splat(1e-300)), splat(0.0));
+  out.S = S, out.p = p, out.q = q, out.r = r;
+  out.y1 = max(y1, splat(0.0)), out.y2 = larger, out.y3 = smaller;
+}
+
+/// E2 − E1 at the lanes' fields (quarticMiddleGap in linear4.cpp): √y1 − √y2.
+Lanes middleGap(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, LaneMask& failed) {
+  ResolventLanes res;
+  resolventAt(f, bx, by, bz, res, failed);
+  const Lanes sum = sqrt(res.y1) + sqrt(res.y2);
+  return select(sum > splat(0.0), (res.y1 - res.y2) / max(sum, splat(1e-300)), splat(0.0));
+}
+
+// Eigenpairs of one manifold at the lanes' fields; `failed` gains the lanes the scalar path must do.
+void solveManifold(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, ManifoldLanes& out, LaneMask& failed) {
+  ResolventLanes res;
+  resolventAt(f, bx, by, bz, res, failed);
+  const Lanes* v = res.v;
+  const Lanes e0 = v[0], ox = v[1], oy = v[2], oz = v[3], sx = v[4], sy = v[5], sz = v[6], c = v[7];
+  const Lanes S = res.S, p = res.p, q = res.q, r = res.r, y1 = res.y1, larger = res.y2, smaller = res.y3;
+  failed = failed | notGreater(y1, splat(0.0));
   const Lanes r1 = sqrt(max(y1, splat(0.0))), r2 = sqrt(larger), r3abs = sqrt(smaller);
   const Lanes r3 = select(q > splat(0.0), -r3abs, r3abs);  // sign of −q: √y1 √y2 √y3 = −q
   Lanes x[4] = {splat(0.5) * (-r1 - r2 + r3), splat(0.5) * (-r1 + r2 - r3), splat(0.5) * (r1 - r2 - r3),
@@ -128,6 +154,13 @@ void solveManifold(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, Manifol
 void addOverlap(const ComplexLanes& g, const ComplexLanes& u, ComplexLanes& acc) {
   acc.re += g.re * u.re + g.im * u.im;
   acc.im += g.re * u.im - g.im * u.re;
+}
+
+unsigned middleGapLanes(const LanePauliForm& form, const double* bxs, const double* bys, const double* bzs,
+                        double* gaps) {
+  LaneMask failed = noLanes();
+  store(gaps, middleGap(form, load(bxs), load(bys), load(bzs), failed));
+  return bits(failed);
 }
 
 unsigned lineLanes(const LaneClassInput& in, const double* bxs, const double* bys, const double* bzs,
