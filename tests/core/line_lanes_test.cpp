@@ -7,6 +7,7 @@
 
 #include <random>
 
+#include "core/hamiltonian/middle_gaps.h"
 #include "core/io/project.h"
 #include "core/optics/line_grid.h"
 
@@ -122,4 +123,28 @@ TEST(LineLanes, FinishGenericPointsAndHandBackKramersPairs) {
 TEST(LineLanes, BestSetIsSupportedAndScalarAlwaysIs) {
   EXPECT_TRUE(laneSetSupported(LaneSet::Scalar));
   EXPECT_TRUE(laneSetSupported(bestLaneSet()));
+}
+
+// The planner's anticrossing scan: the batched middle gap equals the scalar quartic to 1e-9 GHz
+// along rays through zero field, the axis and past anticrossings, for every centre.
+TEST(LineLanes, MiddleGapsEqualTheScalarQuartic) {
+  for (const std::string preset : {"SiV-", "GeV-", "SnV-", "PbV-"}) {
+    const CentreModel model = centre(preset);
+    std::mt19937 rng(23);
+    std::normal_distribution<double> n;
+    for (int cls = 0; cls < 4; ++cls)
+      for (Manifold m : {Manifold::Ground, Manifold::Excited}) {
+        const auto h = LinearHamiltonian4::sample(model.manifold(m), model.strainFor(m, cls), defectFrame(cls));
+        const PauliForm4 form = PauliForm4::fromLinear(h);
+        ASSERT_TRUE(form.closedForm);
+        for (const Vec3& d : {Vec3(defectFrame(cls).row(2).transpose()), Vec3(n(rng), n(rng), n(rng)).normalized()}) {
+          std::vector<Vec3> fields;
+          for (int k = 0; k < 101; ++k) fields.push_back(0.4 * k * d);  // 0..40 T
+          std::vector<double> gaps(fields.size());
+          quarticMiddleGaps(form, fields.data(), static_cast<int>(fields.size()), gaps.data());
+          for (std::size_t k = 0; k < fields.size(); ++k)
+            ASSERT_NEAR(gaps[k], quarticMiddleGap(form, fields[k]), 1e-9) << preset << " class " << cls << " k " << k;
+        }
+      }
+  }
 }
