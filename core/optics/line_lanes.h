@@ -28,7 +28,7 @@ constexpr int kLinePointDoubles = 16 + 16 * 3;
 
 /// Evaluates `kLanes` directions (bx[l], by[l], bz[l]) and writes lane l to out[l]. Returns a bit
 /// per lane that the kernel did not finish: levels closer than 1e-7 of the manifold's scale, an
-/// ill-conditioned elimination or a root that would need the Rayleigh refinement. The caller
+/// or an ill-conditioned elimination (the scalar path's solver or projector fallbacks). The caller
 /// evaluates those lanes with the scalar path, so results equal it to rounding.
 unsigned lineLanesAvx2(const LaneClassInput& in, const double* bx, const double* by, const double* bz,
                        double* const* out);

@@ -8,7 +8,7 @@
 //   which would need vector acos/cos. From above the largest root Newton's iteration decreases
 //   monotonically to it; it is stopped when the step falls below 1e-14 of the root.
 // - every lane where the scalar path would branch (near-degenerate levels, ill-conditioned
-//   elimination, Rayleigh refinement) is reported to the caller, who evaluates it with the
+//   elimination) is reported to the caller, who evaluates it with the
 //   scalar path (and that path's solver fallback at degeneracies).
 // All arithmetic is double precision: the kernel reports absolute line frequencies.
 #include "core/common/simd_lanes.h"
@@ -114,14 +114,16 @@ void solveManifold(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, Manifol
     const Lanes slope = splat(4.0) * xx * xi + splat(2.0) * p * xi + q;
     x[i] = select((slope > splat(0.0)) | (slope < splat(0.0)), xi - value / slope, xi);
   }
-  // Lanes whose roots' rounding would show in the vectors need the scalar Rayleigh refinement.
+  // Where the roots' rounding would show in the vectors (~ε X⁴/|f'(x_i)| against the gap, as in
+  // closedFormEigen4), Rayleigh quotients replace the roots and the vectors are built again.
   const Lanes largest = max(abs(x[0]), abs(x[3]));
   const Lanes rounding = splat(4.0 * 2.220446049250313e-16) * (largest * largest) * (largest * largest);
+  LaneMask refine = noLanes();
   for (int i = 0; i < 4; ++i) {
     Lanes slope = splat(1.0), gap = splat(1e308);
     for (int m = 0; m < 4; ++m)
       if (m != i) slope = slope * (x[i] - x[m]), gap = min(gap, abs(x[i] - x[m]));
-    failed = failed | (rounding > splat(1e-12) * abs(slope) * gap);
+    refine = refine | (rounding > splat(1e-12) * abs(slope) * gap);
   }
   // Eigenvectors by eliminating the y-orbital half (blockVectors in linear4.cpp): the blocks of K
   // are A = oz + s·σ, D = −oz + s·σ and B = diag(u, w).
@@ -131,23 +133,43 @@ void solveManifold(const LanePauliForm& f, Lanes bx, Lanes by, Lanes bz, Manifol
   failed = failed | (norm(uw) < splat(1e-6) * scale4);
   const Lanes u2 = norm(u), w2 = norm(w), p2 = norm(pp);
   const Lanes k00 = oz + sz, k11 = oz - sz, k22 = -oz + sz, k33 = -oz - sz;
-  for (int i = 0; i < 4; ++i) {
-    const Lanes a00 = k00 - x[i], a11 = k11 - x[i], d00 = k22 - x[i], d11 = k33 - x[i];
-    const ComplexLanes n00 = (u2 - a00 * d00) * w - p2 * u, n01 = -(pp * (d00 * w + a11 * u));
-    const ComplexLanes n10 = -(conj(pp) * (a00 * w + d11 * u)), n11 = (w2 - a11 * d11) * u - p2 * w;
-    const Lanes row0 = norm(n00) + norm(n01), row1 = norm(n10) + norm(n11);
-    const LaneMask second = row1 > row0;
-    const ComplexLanes alpha0 = select(second, n11, n01), alpha1 = select(second, -n10, -n00);
-    failed = failed | notGreater(max(row0, row1), splat(1e-18) * scale4 * scale2);
-    const ComplexLanes beta0 = -(w * (a00 * alpha0 + pp * alpha1));
-    const ComplexLanes beta1 = -(u * (conj(pp) * alpha0 + a11 * alpha1));
-    const ComplexLanes top0 = uw * alpha0, top1 = uw * alpha1;
-    const Lanes length2 = norm(top0) + norm(top1) + norm(beta0) + norm(beta1);
-    const Lanes inverse = splat(1.0) / sqrt(max(length2, splat(1e-300)));
-    out.vectors[0][i] = inverse * top0, out.vectors[1][i] = inverse * top1;
-    out.vectors[2][i] = inverse * beta0, out.vectors[3][i] = inverse * beta1;
-    out.energy[i] = x[i] + e0;
+  const auto blockVectors = [&](const Lanes* roots, ComplexLanes (*vectors)[4]) {
+    for (int i = 0; i < 4; ++i) {
+      const Lanes a00 = k00 - roots[i], a11 = k11 - roots[i], d00 = k22 - roots[i], d11 = k33 - roots[i];
+      const ComplexLanes n00 = (u2 - a00 * d00) * w - p2 * u, n01 = -(pp * (d00 * w + a11 * u));
+      const ComplexLanes n10 = -(conj(pp) * (a00 * w + d11 * u)), n11 = (w2 - a11 * d11) * u - p2 * w;
+      const Lanes row0 = norm(n00) + norm(n01), row1 = norm(n10) + norm(n11);
+      const LaneMask second = row1 > row0;
+      const ComplexLanes alpha0 = select(second, n11, n01), alpha1 = select(second, -n10, -n00);
+      failed = failed | notGreater(max(row0, row1), splat(1e-18) * scale4 * scale2);
+      const ComplexLanes beta0 = -(w * (a00 * alpha0 + pp * alpha1));
+      const ComplexLanes beta1 = -(u * (conj(pp) * alpha0 + a11 * alpha1));
+      const ComplexLanes top0 = uw * alpha0, top1 = uw * alpha1;
+      const Lanes length2 = norm(top0) + norm(top1) + norm(beta0) + norm(beta1);
+      const Lanes inverse = splat(1.0) / sqrt(max(length2, splat(1e-300)));
+      vectors[0][i] = inverse * top0, vectors[1][i] = inverse * top1;
+      vectors[2][i] = inverse * beta0, vectors[3][i] = inverse * beta1;
+    }
+  };
+  blockVectors(x, out.vectors);
+  if (bits(refine) != 0) {
+    // Rayleigh quotients Re(v† K v) with K's zero entries K03 = K12 = 0 skipped.
+    Lanes refined[4];
+    for (int i = 0; i < 4; ++i) {
+      const ComplexLanes v0 = out.vectors[0][i], v1 = out.vectors[1][i], v2 = out.vectors[2][i], v3 = out.vectors[3][i];
+      const ComplexLanes kv0 = k00 * v0 + pp * v1 + u * v2, kv1 = conj(pp) * v0 + k11 * v1 + w * v3;
+      const ComplexLanes kv2 = conj(u) * v0 + k22 * v2 + pp * v3, kv3 = conj(w) * v1 + conj(pp) * v2 + k33 * v3;
+      const auto realDot = [](const ComplexLanes& a, const ComplexLanes& b) { return a.re * b.re + a.im * b.im; };
+      refined[i] = select(refine, realDot(v0, kv0) + realDot(v1, kv1) + realDot(v2, kv2) + realDot(v3, kv3), x[i]);
+    }
+    ComplexLanes again[4][4];
+    blockVectors(refined, again);
+    for (int i = 0; i < 4; ++i) {
+      x[i] = refined[i];
+      for (int n = 0; n < 4; ++n) out.vectors[n][i] = select(refine, again[n][i], out.vectors[n][i]);
+    }
   }
+  for (int i = 0; i < 4; ++i) out.energy[i] = x[i] + e0;
 }
 
 // conj(g_n)·u_m summed into `acc` (the overlap of components n of g and m of u).
