@@ -5,7 +5,8 @@
 
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 
 namespace finestra::cli {
 namespace {

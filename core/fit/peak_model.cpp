@@ -8,6 +8,7 @@
 #include "core/common/errors.h"
 #include "core/crystal/frames.h"
 #include "core/hamiltonian/hamiltonian.h"
+#include "core/project/model_setup.h"
 
 namespace finestra {
 namespace {

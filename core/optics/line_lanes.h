@@ -18,7 +18,7 @@ struct LanePauliForm {
 struct LaneClassInput {
   LanePauliForm ground, excited;
   double zplGHz;
-  double dipoleRatio;  ///< r in d_x = r σ_z, d_y = −r σ_x, d_z = 1 (core/optics/dipole.h)
+  double dipoleRatio;  ///< r in d_x = r σ_z, d_y = −r σ_x, d_z = 1 (core/model/dipole.h)
   double frame[3][3];  ///< defect frame F(row, column): defect axis `row` against crystal axis `column`
 };
 

@@ -8,7 +8,7 @@
 #include <numbers>
 
 #include "core/common/errors.h"
-#include "core/hamiltonian/middle_gaps.h"
+#include "core/optics/middle_gaps.h"
 #include "core/units/linewidth.h"
 
 namespace finestra {

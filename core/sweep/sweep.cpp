@@ -5,7 +5,8 @@
 #include "core/common/parallel.h"
 #include "core/crystal/frames.h"
 #include "core/hamiltonian/linear4.h"
-#include "core/sweep/tracking.h"
+#include "core/model/tracking.h"
+#include "core/project/sweep_path.h"
 
 namespace finestra {
 namespace {

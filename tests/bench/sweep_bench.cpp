@@ -5,7 +5,8 @@
 
 #include <sys/resource.h>
 
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 #include "core/sweep/sweep.h"
 
 namespace {

@@ -7,8 +7,8 @@
 
 #include <random>
 
-#include "core/hamiltonian/middle_gaps.h"
-#include "core/io/project.h"
+#include "core/optics/middle_gaps.h"
+#include "core/project/model_setup.h"
 #include "core/optics/line_grid.h"
 
 using namespace finestra;

@@ -1,4 +1,4 @@
-#include "core/hamiltonian/middle_gaps.h"
+#include "core/optics/middle_gaps.h"
 
 #include <algorithm>
 
