@@ -7,7 +7,10 @@
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_thermal.h"
+#include "app/cli/commands_resonance.h"
 #include "core/common/errors.h"
+#include "core/common/version.h"
 
 using namespace finestra::cli;
 
@@ -24,6 +27,7 @@ void addProjectOptions(CLI::App* cmd, CommonOptions& options) {
 
 int main(int argc, char** argv) {
   CLI::App app{"finestra-cli: fine structure of group-IV vacancy centres in diamond"};
+  app.set_version_flag("--version", std::string(finestra::kVersion), "print the Finestra version and exit");
   app.require_subcommand(1);
   CommonOptions common;
   OutputFormat presetFormat = OutputFormat::Table;
@@ -62,6 +66,19 @@ int main(int argc, char** argv) {
   auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
   addProjectOptions(strainCmd, common);
   addStrainOptions(strainCmd, strainOptions);
+  MicrowaveOptions microwaveOptions;
+  auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
+  addProjectOptions(microwaveCmd, common);
+  addMicrowaveOptions(microwaveCmd, microwaveOptions);
+  LambdaOptions lambdaOptions;
+  auto* lambdaCmd = app.add_subcommand("lambda-systems", "Lambda systems: excited levels linked to two ground levels by allowed lines");
+  addProjectOptions(lambdaCmd, common);
+  addLambdaOptions(lambdaCmd, lambdaOptions);
+
+  ThermalOptions thermalOptions;
+  auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
+  addProjectOptions(thermalCmd, common);
+  addThermalOptions(thermalCmd, thermalOptions);
 
   try {
     app.parse(argc, argv);
@@ -77,6 +94,9 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*thermalCmd) return runThermal(common, thermalOptions);
+    if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
+    if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;
