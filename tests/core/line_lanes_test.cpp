@@ -70,8 +70,10 @@ void expectLanesEqualScalar(const LineGridKernel& kernel, int cls, const std::ve
     for (std::size_t line = 0; line < 16; ++line) {
       ASSERT_NEAR(lanes[k].frequencyGHz[line], scalar.frequencyGHz[line], 1e-9)
           << what << " class " << cls << " field " << fields[k].transpose() << " line " << line;
+      // Intensities come from eigenvectors, whose rounding grows as scale/gap: at mT fields a
+      // PbV- Kramers pair is split by ~1e-5 of λ, leaving both paths about 1e-9 apart.
       for (std::size_t axis = 0; axis < 3; ++axis)
-        ASSERT_NEAR(lanes[k].intensityCrystal[line][axis], scalar.intensityCrystal[line][axis], 1e-9)
+        ASSERT_NEAR(lanes[k].intensityCrystal[line][axis], scalar.intensityCrystal[line][axis], 1e-8)
             << what << " class " << cls << " field " << fields[k].transpose() << " line " << line;
     }
   }
