@@ -3,7 +3,8 @@
 # (Release), runs each of them and the NumPy baseline (tests/bench/numpy_baseline.py, or
 # FINESTRA_NUMPY_BASELINE) in the same run, and prints one table with the machine. Benchmarks that
 # report class-points per second (counter class_points_per_s: one field direction × one orientation
-# class, both manifolds and all lines, the baseline's unit of work) get the ratio to NumPy.
+# class, both manifolds and all lines, the baseline's unit of work) get the ratio to NumPy; those
+# that report peak_MB (getrusage ru_maxrss of the benchmark process) get their peak memory.
 # Usage: scripts/bench_report.sh [build-dir, default build/release] [numpy directions, default 20000]
 set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
@@ -40,7 +41,7 @@ for line in open("/proc/cpuinfo"):
         cpu = line.split(":", 1)[1].strip(); break
 print(f"machine: {os.cpu_count()} CPUs (nproc {subprocess.run(['nproc'], capture_output=True, text=True).stdout.strip()}), {cpu}")
 print(f"NumPy baseline: {numpy_text.strip()}")
-rows = [("benchmark", "time/iter", "class-points/s", "ratio to NumPy")]
+rows = [("benchmark", "time/iter", "class-points/s", "ratio to NumPy", "peak MB")]
 for path in sorted(glob.glob(os.path.join(out, "*.json"))):
     data = json.load(open(path))
     for b in data.get("benchmarks", []):
@@ -48,8 +49,10 @@ for path in sorted(glob.glob(os.path.join(out, "*.json"))):
             continue
         t = f'{b["real_time"]:.4g} {b["time_unit"]}'
         rate = b.get("class_points_per_s")
-        rows.append((b["name"], t, f"{rate:.3e}" if rate else "-", f"{rate / numpy_rate:.2f}x" if rate else "-"))
-widths = [max(len(r[i]) for r in rows) for i in range(4)]
+        peak = b.get("peak_MB")
+        rows.append((b["name"], t, f"{rate:.3e}" if rate else "-", f"{rate / numpy_rate:.2f}x" if rate else "-",
+                     f"{peak:.0f}" if peak else "-"))
+widths = [max(len(r[i]) for r in rows) for i in range(5)]
 for k, r in enumerate(rows):
     print("  ".join(c.ljust(widths[i]) for i, c in enumerate(r)))
     if k == 0:

@@ -12,11 +12,14 @@
 namespace finestra::cli {
 namespace {
 
-void print(const nlohmann::ordered_json& json, const Table& table, OutputFormat format) {
+// Builds only what `format` prints: the JSON document or the table (for a long sweep, building
+// the one not printed costs as much as the computation).
+template <class MakeJson, class MakeTable>
+void print(OutputFormat format, MakeJson&& makeJson, MakeTable&& makeTable) {
   switch (format) {
-    case OutputFormat::Json: std::cout << json.dump(2) << '\n'; break;
-    case OutputFormat::Csv: std::cout << table.toCsv(); break;
-    case OutputFormat::Table: std::cout << table.toText(); break;
+    case OutputFormat::Json: std::cout << makeJson().dump(2) << '\n'; break;
+    case OutputFormat::Csv: std::cout << makeTable().toCsv(); break;
+    case OutputFormat::Table: std::cout << makeTable().toText(); break;
   }
 }
 
@@ -37,21 +40,21 @@ Loaded load(const std::string& path) {
 }  // namespace
 
 int runPresets(OutputFormat format) {
-  print(presetsJson(builtinPresets()), presetsTable(builtinPresets()), format);
+  print(format, [] { return presetsJson(builtinPresets()); }, [] { return presetsTable(builtinPresets()); });
   return 0;
 }
 
 int runLevels(const CommonOptions& o) {
   const Loaded l = load(o.project);
   const auto classes = solveProjectClasses(l.model, l.project);
-  print(levelsJson(classes), levelsTable(classes), o.format);
+  print(o.format, [&] { return levelsJson(classes); }, [&] { return levelsTable(classes); });
   return 0;
 }
 
 int runLines(const CommonOptions& o) {
   const Loaded l = load(o.project);
   const auto classes = solveProjectClasses(l.model, l.project);
-  print(linesJson(l.model, classes), linesTable(l.model, classes), o.format);
+  print(o.format, [&] { return linesJson(l.model, classes); }, [&] { return linesTable(l.model, classes); });
   return 0;
 }
 
@@ -67,7 +70,8 @@ int runSpectrum(const CommonOptions& o, const SpectrumOptions& s) {
   std::array<double, 2> range{s.from, s.to};
   if (s.from == s.to) range = autoRange(l.model, weighted, unit);
   const SpectrumCurve curve = computeSpectrum(l.model, weighted, unit, range[0], range[1], s.points);
-  print(spectrumJson(curve, unit, kind), spectrumTable(curve, unit), o.format == OutputFormat::Table ? OutputFormat::Csv : o.format);
+  print(o.format == OutputFormat::Table ? OutputFormat::Csv : o.format, [&] { return spectrumJson(curve, unit, kind); },
+        [&] { return spectrumTable(curve, unit); });
   return 0;
 }
 
@@ -82,7 +86,7 @@ int runSweep(const CommonOptions& o, const SweepOptions& s) {
     if (!spec) throw InputError("--name", "no sweep named '" + s.name + "' in " + o.project);
   }
   const SweepResult result = finestra::runSweep(l.model, l.project, *spec);
-  print(sweepJson(*spec, result), sweepLinesTable(*spec, result), o.format);
+  print(o.format, [&] { return sweepJson(*spec, result); }, [&] { return sweepLinesTable(*spec, result); });
   return 0;
 }
 

@@ -6,6 +6,8 @@
 #include <limits>
 
 #include "core/common/errors.h"
+#include "core/crystal/frames.h"
+#include "core/hamiltonian/hamiltonian.h"
 #include "core/project/model_setup.h"
 
 namespace finestra {
@@ -87,6 +89,22 @@ Vec3 setFieldCrystal(const FitProblem& problem, const FitState& state, int set) 
   return problem.baseSetup.lab.toCrystal(trueFieldLab(state, problem.sets[static_cast<std::size_t>(set)].nominalFieldLab));
 }
 
+namespace {
+
+// Ground and excited energies of class `cls` (what the residuals use): eigenvalues only, with
+// CentreModel::levels's checks and messages where its path would report bad input.
+std::pair<VectorXr, VectorXr> classEnergies(const CentreModel& model, int cls, const Vec3& fieldCrystal) {
+  const Vec3 fieldDefect = defectFrame(cls) * fieldCrystal;
+  if (fieldCrystal.norm() <= 1000.0) {
+    VectorXr ground = levelEnergies(model.manifold(Manifold::Ground), model.strainFor(Manifold::Ground, cls), fieldDefect);
+    VectorXr excited = levelEnergies(model.manifold(Manifold::Excited), model.strainFor(Manifold::Excited, cls), fieldDefect);
+    if (ground.allFinite() && excited.allFinite()) return {std::move(ground), std::move(excited)};
+  }
+  return {model.levels(Manifold::Ground, cls, fieldCrystal).energies, model.levels(Manifold::Excited, cls, fieldCrystal).energies};
+}
+
+}  // namespace
+
 std::vector<PredictedLine> predictSetLines(const FitProblem& problem, const CentreModel& model, const FitState& state, int set) {
   const Vec3 field = setFieldCrystal(problem, state, set);
   std::vector<PredictedLine> out;
@@ -125,7 +143,7 @@ Eigen::VectorXd PeakFitModel::predictions(const Eigen::VectorXd& x) const {
   const double zpl = model->zplGHz();
   int currentSet = -1;
   Vec3 field = Vec3::Zero();
-  std::array<std::optional<std::pair<ManifoldEigen, ManifoldEigen>>, kClassCount> levels;
+  std::array<std::optional<std::pair<VectorXr, VectorXr>>, kClassCount> levels;  // ground, excited energies
   for (std::size_t k = 0; k < assigned_.size(); ++k) {
     const PreparedPeak& peak = problem_->peaks[static_cast<std::size_t>(assigned_[k])];
     if (peak.set != currentSet) {
@@ -136,8 +154,8 @@ Eigen::VectorXd PeakFitModel::predictions(const Eigen::VectorXd& x) const {
     const LineRef& ref = *assignment_[static_cast<std::size_t>(assigned_[k])];
     auto& cached = levels[static_cast<std::size_t>(ref.cls)];
     if (!cached)
-      cached.emplace(model->levels(Manifold::Ground, ref.cls, field), model->levels(Manifold::Excited, ref.cls, field));
-    out[static_cast<Eigen::Index>(k)] = zpl + cached->second.energies[ref.upper] - cached->first.energies[ref.lower];
+      cached.emplace(classEnergies(*model, ref.cls, field));
+    out[static_cast<Eigen::Index>(k)] = zpl + cached->second[ref.upper] - cached->first[ref.lower];
   }
   return out;
 }

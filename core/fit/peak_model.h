@@ -68,6 +68,10 @@ public:
   int parameterCount() const override { return static_cast<int>(problem_->free.size()); }
   int residualCount() const override { return static_cast<int>(assigned_.size()); }
   void residuals(const Eigen::VectorXd& x, Eigen::VectorXd& out) const override;
+  /// Analytic in the eigenproblem (core/fit/peak_jacobian.cpp): level derivatives from the
+  /// Hellmann–Feynman theorem with the eigenvectors at x; central differences where the model
+  /// cannot be evaluated at x or at a probe.
+  void jacobian(const Eigen::VectorXd& x, Eigen::MatrixXd& out) const override;
   Eigen::VectorXd derivativeSteps(const Eigen::VectorXd& x) const override;
   std::unique_ptr<FitModel> clone() const override { return std::make_unique<PeakFitModel>(*this); }
 

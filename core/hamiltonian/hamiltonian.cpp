@@ -79,6 +79,12 @@ ManifoldEigen4 diagonalise4(const ManifoldModel& m, const StrainTerms& s, const 
   return {solver.eigenvalues(), solver.eigenvectors()};
 }
 
+VectorXr levelEnergies(const ManifoldModel& m, const StrainTerms& s, const Vec3& B) {
+  if (m.nuclearDim == 1)
+    return Eigen::SelfAdjointEigenSolver<Matrix4c>(electronicHamiltonian(m, s, B), Eigen::EigenvaluesOnly).eigenvalues();
+  return Eigen::SelfAdjointEigenSolver<MatrixXc>(fullHamiltonian(m, s, B), Eigen::EigenvaluesOnly).eigenvalues();
+}
+
 ManifoldEigen diagonalise(const ManifoldModel& m, const StrainTerms& s, const Vec3& B) {
   if (m.nuclearDim == 1) {
     ManifoldEigen4 e = diagonalise4(m, s, B);

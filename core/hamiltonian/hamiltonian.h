@@ -29,6 +29,8 @@ MatrixXc fullHamiltonian(const ManifoldModel& m, const StrainTerms& s, const Vec
 /// Diagonalises with a self-adjoint solver: fixed 4×4 path without isotope, dynamic otherwise.
 ManifoldEigen diagonalise(const ManifoldModel& m, const StrainTerms& s, const Vec3& fieldDefect);
 ManifoldEigen4 diagonalise4(const ManifoldModel& m, const StrainTerms& s, const Vec3& fieldDefect);
+/// Energies only, ascending (GHz): the eigenvalues of diagonalise() without computing eigenvectors.
+VectorXr levelEnergies(const ManifoldModel& m, const StrainTerms& s, const Vec3& fieldDefect);
 
 /// Nuclear spin matrices I_x, I_y, I_z for dimension 2I+1 (basis m_I = I … −I).
 struct SpinMatrices {

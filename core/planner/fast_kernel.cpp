@@ -4,9 +4,11 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <array>
 #include <numbers>
 
 #include "core/common/errors.h"
+#include "core/optics/middle_gaps.h"
 #include "core/thermal/planning_width.h"
 #include "core/units/linewidth.h"
 
@@ -67,12 +69,27 @@ PlannerKernel::GapResult PlannerKernel::smallestMiddleGap(const LinearHamiltonia
     return solver.eigenvalues()[2] - solver.eigenvalues()[1];
   };
   const int n = settings_.gapScanSamples;
+  // The coarse scan: gap(k/n) for k = 0..n−1, several samples per instruction, in blocks that
+  // live on the stack.
+  constexpr int kBlock = 64;
   GapResult best{gapAtEnd, magnitudeT};
   int bestIndex = n;
-  for (int k = 0; k < n; ++k) {
-    const double t = static_cast<double>(k) / n;
-    const double g = k == 0 ? gapAtStart : gapAt(t);
-    if (g < best.gapGHz) best = {g, t * magnitudeT}, bestIndex = k;
+  for (int first = 0; first < n; first += kBlock) {
+    const int count = std::min(kBlock, n - first);
+    std::array<Vec3, kBlock> fields;
+    std::array<double, kBlock> coarse;
+    for (int i = 0; i < count; ++i) fields[static_cast<std::size_t>(i)] = (static_cast<double>(first + i) / n * magnitudeT) * direction;
+    if (form.closedForm) {
+      quarticMiddleGaps(form, fields.data(), count, coarse.data());
+    } else {
+      for (int i = 0; i < count; ++i) coarse[static_cast<std::size_t>(i)] = gapAt(static_cast<double>(first + i) / n);
+    }
+    if (first == 0) coarse[0] = gapAtStart;
+    for (int i = 0; i < count; ++i) {
+      const int k = first + i;
+      const double g = coarse[static_cast<std::size_t>(i)];
+      if (g < best.gapGHz) best = {g, static_cast<double>(k) / n * magnitudeT}, bestIndex = k;
+    }
   }
   // Usual case below the anticrossing field: the gap still shrinks at |B|. One probe just inside
   // the end confirms it, and the bracket's minimum (assumed unimodal, like the search) is the end.

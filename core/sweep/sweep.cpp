@@ -3,6 +3,8 @@
 #include <atomic>
 
 #include "core/common/parallel.h"
+#include "core/crystal/frames.h"
+#include "core/hamiltonian/linear4.h"
 #include "core/model/tracking.h"
 #include "core/project/sweep_path.h"
 #include "core/thermal/level_widths.h"
@@ -34,6 +36,40 @@ struct ManifoldTrack {
   }
 };
 
+/// Levels of one class along a field sweep. Without an isotope and with the strain fixed, both
+/// manifolds are linear in B (docs/physics.md, Hamiltonian): sampled once, then diagonalised per
+/// point in closed form (core/hamiltonian/linear4.h, solver fallback at degeneracies) instead of
+/// rebuilding and diagonalising the general Hamiltonian. Otherwise CentreModel::levels.
+class SweepLevels {
+public:
+  SweepLevels(const CentreModel& model, const SweepSpec& sweep, int cls) : model_(model), cls_(cls) {
+    linear_ = sweep.kind != SweepKind::Strain && !model.setup().centre.parameters.hasNuclearSpin();
+    if (!linear_) return;
+    for (Manifold m : {Manifold::Ground, Manifold::Excited}) {
+      const auto k = static_cast<std::size_t>(m == Manifold::Excited);
+      hamiltonian_[k] = LinearHamiltonian4::sample(model.manifold(m), model.strainFor(m, cls), defectFrame(cls));
+      form_[k] = PauliForm4::fromLinear(hamiltonian_[k]);
+    }
+  }
+
+  ManifoldEigen at(Manifold m, const Vec3& fieldCrystal, const Mat3& strain) const {
+    if (!linear_ || !(fieldCrystal.norm() <= 1000.0))  // the model's own path reports bad fields
+      return model_.levels(m, cls_, fieldCrystal, &strain);
+    const auto k = static_cast<std::size_t>(m == Manifold::Excited);
+    ManifoldEigen4 fixed;
+    eigen4(form_[k], hamiltonian_[k], fieldCrystal, fixed);
+    if (!fixed.energies.allFinite() || !fixed.vectors.allFinite()) return model_.levels(m, cls_, fieldCrystal, &strain);
+    return {fixed.energies, fixed.vectors};
+  }
+
+private:
+  const CentreModel& model_;
+  int cls_;
+  bool linear_ = false;
+  std::array<LinearHamiltonian4, 2> hamiltonian_{};
+  std::array<PauliForm4, 2> form_{};
+};
+
 ClassSweep sweepClass(const CentreModel& model, const Project& project, const SweepSpec& sweep, int cls,
                       const std::vector<double>& xs, const ProgressControl& control, std::atomic<long>& done,
                       long total) {
@@ -41,6 +77,7 @@ ClassSweep sweepClass(const CentreModel& model, const Project& project, const Sw
   ClassSweep out;
   out.cls = cls;
   ManifoldTrack g, u;
+  const SweepLevels levels(model, sweep, cls);
   for (std::size_t k = 0; k < xs.size(); ++k) {
     control.throwIfCancelled();
     const Vec3 field = sweepField(project, sweep, lab, xs[k]);
@@ -52,8 +89,8 @@ ClassSweep sweepClass(const CentreModel& model, const Project& project, const Sw
       out.groundLevels.resize(static_cast<Eigen::Index>(xs.size()), g.eigen.energies.size());
       out.excitedLevels.resize(static_cast<Eigen::Index>(xs.size()), u.eigen.energies.size());
     } else {
-      g.advance(model.levels(Manifold::Ground, cls, field, &strain));
-      u.advance(model.levels(Manifold::Excited, cls, field, &strain));
+      g.advance(levels.at(Manifold::Ground, field, strain));
+      u.advance(levels.at(Manifold::Excited, field, strain));
     }
     const auto row = static_cast<Eigen::Index>(k);
     for (Eigen::Index i = 0; i < g.eigen.energies.size(); ++i) out.groundLevels(row, g.id[i]) = g.eigen.energies[i];

@@ -4,6 +4,8 @@
 // tests/bench/engine_vs_numpy.sh runs this and the NumPy baseline in one go and prints the ratio.
 #include <benchmark/benchmark.h>
 
+#include <sys/resource.h>
+
 #include <cmath>
 #include <numbers>
 
@@ -27,19 +29,40 @@ CentreModel silicon() {
   return CentreModel(ModelSetup{resolveCentre("SiV-", std::nullopt, {}), LabFrame(), {}, {}});
 }
 
-void BM_LineGrid(benchmark::State& state) {
+double peakResidentMB() {
+  rusage usage{};
+  getrusage(RUSAGE_SELF, &usage);
+  return static_cast<double>(usage.ru_maxrss) / 1024.0;  // ru_maxrss is in kB on Linux
+}
+
+void runLineGrid(benchmark::State& state, LaneSet lanes) {
+  if (!laneSetSupported(lanes)) {
+    state.SkipWithError("this CPU does not run this lane kernel");
+    return;
+  }
   const CentreModel model = silicon();
   const std::vector<Vec3> fields = baselineFields(state.range(0));
   const std::vector<int> classes{0, 1, 2, 3};
   std::vector<LineGridPoint> out;
   for (auto _ : state) {
-    evaluateLineGrid(model, fields, classes, out);
+    evaluateLineGrid(model, fields, classes, out, {}, lanes);
     benchmark::DoNotOptimize(out.data());
   }
   state.counters["class_points_per_s"] =
       benchmark::Counter(static_cast<double>(state.range(0) * 4), benchmark::Counter::kIsIterationInvariantRate);
+  state.counters["peak_MB"] = peakResidentMB();
 }
+
+/// The widest lane kernel this CPU runs (what the program uses).
+void BM_LineGrid(benchmark::State& state) { runLineGrid(state, bestLaneSet()); }
+/// Each variant alone, for the ratio between them in one run.
+void BM_LineGridScalar(benchmark::State& state) { runLineGrid(state, LaneSet::Scalar); }
+void BM_LineGridAvx2(benchmark::State& state) { runLineGrid(state, LaneSet::Avx2); }
+void BM_LineGridAvx512(benchmark::State& state) { runLineGrid(state, LaneSet::Avx512); }
 }  // namespace
 
 BENCHMARK(BM_LineGrid)->Arg(20000)->Arg(2000)->Unit(benchmark::kMillisecond)->UseRealTime();
+BENCHMARK(BM_LineGridScalar)->Arg(20000)->Unit(benchmark::kMillisecond)->UseRealTime();
+BENCHMARK(BM_LineGridAvx2)->Arg(20000)->Unit(benchmark::kMillisecond)->UseRealTime();
+BENCHMARK(BM_LineGridAvx512)->Arg(20000)->Unit(benchmark::kMillisecond)->UseRealTime();
 BENCHMARK_MAIN();
