@@ -6,6 +6,7 @@
 
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
+#include "app/cli/commands_peaks.h"
 #include "app/cli/commands_plan.h"
 #include "core/common/errors.h"
 
@@ -59,9 +60,13 @@ int main(int argc, char** argv) {
   addProjectOptions(fitCmd, common);
   addFitOptions(fitCmd, fitOptions);
   StrainCommandOptions strainOptions;
-  auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
+  auto* strainCmd = app.add_subcommand("strain", "closed-form strain from four zero-field lines: a project's zero-field set, typed lines or a CSV of many emitters");
   addProjectOptions(strainCmd, common);
+  strainCmd->get_option("project")->required(false);
   addStrainOptions(strainCmd, strainOptions);
+  PeaksCommandOptions peaksOptions;
+  auto* peaksCmd = app.add_subcommand("peaks", "find and fit the peaks of a measured spectrum CSV (exit 4: fit not converged)");
+  addPeaksOptions(peaksCmd, peaksOptions);
 
   try {
     app.parse(argc, argv);
@@ -77,6 +82,7 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*peaksCmd) return runPeaks(peaksOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;
