@@ -135,7 +135,7 @@ int runStrain(const CommonOptions& o, const StrainCommandOptions& s) {
     switch (o.format) {
       case OutputFormat::Json: std::cout << strainJson(project, selection, e).dump(2) << '\n'; break;
       case OutputFormat::Csv: std::cout << strainTable(e).toCsv(); break;
-      case OutputFormat::Table: std::cout << strainTable(e).toText(); break;
+      case OutputFormat::Table: std::cout << strainTable(e).toText() << '\n' << strainVerdictText(e); break;
     }
     return 0;
   });

@@ -8,6 +8,7 @@
 #include "app/cli/commands_fit.h"
 #include "app/cli/commands_peaks.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_spectrum_fit.h"
 #include "core/common/errors.h"
 
 using namespace finestra::cli;
@@ -67,6 +68,10 @@ int main(int argc, char** argv) {
   PeaksCommandOptions peaksOptions;
   auto* peaksCmd = app.add_subcommand("peaks", "find and fit the peaks of a measured spectrum CSV (exit 4: fit not converged)");
   addPeaksOptions(peaksCmd, peaksOptions);
+  SpectrumFitCommandOptions spectrumFitOptions;
+  auto* spectrumFitCmd = app.add_subcommand("fit-spectrum", "fit the model directly to raw spectra, one per measurement set (exit 4: not converged)");
+  addProjectOptions(spectrumFitCmd, common);
+  addSpectrumFitOptions(spectrumFitCmd, spectrumFitOptions);
 
   try {
     app.parse(argc, argv);
@@ -83,6 +88,7 @@ int main(int argc, char** argv) {
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
     if (*peaksCmd) return runPeaks(peaksOptions);
+    if (*spectrumFitCmd) return runSpectrumFit(common, spectrumFitOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;

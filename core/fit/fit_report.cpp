@@ -188,14 +188,13 @@ Table strainTable(const ZeroFieldStrainEstimate& e) {
   add("ZPL shift (GHz)", e.zplShiftGHz, 3);
   addStrain("A1g: eps_xx+eps_yy if all t_perp", e.a1gPerpendicular);
   addStrain("A1g: eps_zz if all t_par", e.a1gParallel);
-  const StrainVerdict v = strainVerdict(e);
-  t.rows.push_back({"readings", v.readings});
-  t.rows.push_back({"pure d", v.pureD});
-  t.rows.push_back({"pure f", v.pureF});
-  t.rows.push_back({"verdict", v.overall});
-  t.rows.push_back({"units", v.units});
-  t.rows.push_back({"cannot determine", v.cannotDetermine});
   return t;
+}
+
+std::string strainVerdictText(const ZeroFieldStrainEstimate& e) {
+  const StrainVerdict v = strainVerdict(e);
+  return "Units: " + v.units + ".\n" + v.readings + ".\n" + v.pureD + "; " + v.pureF + ".\nVerdict: " + v.overall +
+         ".\nNote: " + v.cannotDetermine + ".\n";
 }
 
 }  // namespace finestra

@@ -8,7 +8,8 @@ namespace {
 
 using ordered = nlohmann::ordered_json;
 
-const char* kUndeterminedReason = "the fit cannot determine this peak's parameters separately (degenerate with a neighbour)";
+const char* kUndeterminedReason =
+    "the data cannot determine this figure (the peak is degenerate with a neighbour or a width component sits at its limit)";
 
 void putWithError(ordered& o, const std::string& key, double value, const std::string& errorKey, double error) {
   o[key] = std::isfinite(value) ? ordered(value) : ordered(nullptr);
