@@ -42,7 +42,8 @@ std::vector<PeakAlternatives> rankPeakAlternatives(const FitProblem& problem, co
     const auto labels = lineLabels(model, problem, state, s);
     auto labelOf = [&](const LineRef& r) {
       const auto it = labels.find({r.cls, r.upper, r.lower});
-      return it == labels.end() ? std::string() : it->second;
+      // The class is named too: the same letter occurs once per orientation class.
+      return (it == labels.end() ? std::string("?") : it->second) + " (class " + std::to_string(r.cls) + ")";
     };
     double maxIntensity = 0;
     for (const auto& l : lines) maxIntensity = std::max(maxIntensity, l.intensity);
