@@ -87,7 +87,12 @@ namespace {
 ModelSetup strainModelSetup(const CommonOptions& o, const StrainCommandOptions& s) {
   if (!o.project.empty()) return inProject(o.project, [&] { return makeModelSetup(readProjectFile(o.project)); });
   if (s.centre.empty()) throw InputError("strain", "give a project file or --centre PRESET");
-  return ModelSetup{resolveCentre(s.centre, std::nullopt, {}), LabFrame(Vec3(0, 0, 1), Vec3(1, 0, 0)), {}, {}};
+  try {
+    return ModelSetup{resolveCentre(s.centre, std::nullopt, {}), LabFrame(Vec3(0, 0, 1), Vec3(1, 0, 0)), {}, {}};
+  } catch (const InputError& e) {
+    const std::string what = e.what();
+    throw InputError("--centre", what.substr(e.where().empty() ? 0 : e.where().size() + 2));
+  }
 }
 
 int printStrainMap(const CommonOptions& o, const CentreModel& model, const std::vector<EmitterLines>& emitters) {

@@ -197,7 +197,9 @@ PeakFinderResult findPeaks(const std::vector<double>& position, const std::vecto
   result.noise = estimateNoise(data->signal);
   if (!(result.noise > 0)) {
     const auto [lo, hi] = std::minmax_element(data->signal.begin(), data->signal.end());
-    result.noise = 1e-9 * std::max(*hi - *lo, 1e-300);
+    double scale = std::max({*hi - *lo, std::abs(*hi), std::abs(*lo)});
+    if (!(scale > 0)) scale = 1.0;
+    result.noise = 1e-9 * scale;
     result.noiseFloored = true;
   }
   const double noise = result.noise;

@@ -34,7 +34,7 @@ struct PeakFinderResult {
   std::vector<FoundPeak> peaks;  ///< ascending position
   LineShape shape = LineShape::Lorentzian;
   double noise = 0;              ///< σ of one sample
-  bool noiseFloored = false;     ///< the data showed no noise; a floor of 1e-9 × signal range was used
+  bool noiseFloored = false;     ///< the data showed no noise; a floor of 1e-9 × the signal's size (1e-9 for an all-zero signal) was used
   LinearBaseline baseline;
   double chi2 = 0, chi2PerDof = 0;
   int dof = 0;

@@ -4,6 +4,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <iostream>
 #include <numbers>
 #include <random>
 #include <vector>
@@ -91,6 +92,8 @@ TEST(PeaksFinder, RecoversInventedLorentziansWithUnitPulls) {
   }
   const double n = static_cast<double>(pulls.size());
   const double mean = sum / n, sd = std::sqrt(sum2 / n - mean * mean);
+  std::cout << "peak recovery: " << found << "/" << truth << " found, " << falsePeaks << " false of " << detected
+            << ", pulls n=" << pulls.size() << " mean " << mean << " sd " << sd << ", within 3σ " << within3 << "\n";
   EXPECT_GE(within3, 0.98 * n) << "positions, widths and areas within 3σ";
   EXPECT_NEAR(mean, 0.0, 0.2);
   EXPECT_NEAR(sd, 1.0, 0.15) << "pull width near 1: the errors are neither too small nor too large";

@@ -6,6 +6,7 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <iostream>
 #include <random>
 
 #include "core/common/errors.h"
@@ -127,6 +128,8 @@ TEST(PeaksSpectrumFit, RecoversStrainAndFieldScaleAndBeatsThePeakRoute) {
       spectrumError += std::pow((v - truth) / scale, 2);
       peakError += std::pow((value(peaks.parameters, name) - truth) / scale, 2);
     }
+    std::cout << "seed " << seed << ": squared error in parameter scales, spectrum fit " << spectrumError << ", peak route "
+              << peakError << " (peak route: " << peaks.assignedCount << " peaks assigned, chi2/dof " << peaks.chi2PerDof << ")\n";
     if (spectrumError < peakError) ++spectrumCloser;
   }
   EXPECT_EQ(spectrumCloser, seeds) << "the spectrum fit must beat the peak route on overlapping lines";
