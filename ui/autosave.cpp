@@ -8,7 +8,8 @@
 #include <spdlog/spdlog.h>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
 #include "ui/document.h"
 
 namespace finestra::ui {

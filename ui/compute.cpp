@@ -3,8 +3,9 @@
 #include <spdlog/spdlog.h>
 
 #include "core/common/errors.h"
-#include "core/model/evaluate.h"
+#include "core/project/evaluate.h"
 #include "core/optics/line_info.h"
+#include "core/project/model_setup.h"
 
 namespace finestra::ui {
 

@@ -12,7 +12,7 @@
 #include <memory>
 #include <optional>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/optics/spectrum.h"
 #include "core/sweep/sweep.h"
 #include "ui/plot_data.h"

@@ -3,6 +3,9 @@
 #include <QHash>
 #include <QUndoCommand>
 
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+
 namespace finestra::ui {
 namespace {
 

@@ -10,7 +10,7 @@
 #include <functional>
 #include <optional>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/io/spectrum_csv.h"
 
 namespace finestra::ui {

@@ -6,7 +6,7 @@
 #include <qcustomplot.h>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/text_file.h"
 
 namespace finestra::ui {
 

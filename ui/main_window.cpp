@@ -16,6 +16,7 @@
 
 #include "core/common/errors.h"
 #include "core/io/peak_csv.h"
+#include "core/io/project_file.h"
 #include "ui/dialogs.h"
 #include "ui/figure_export.h"
 #include "ui/log_panel.h"

@@ -17,6 +17,7 @@
 
 #include "core/common/errors.h"
 #include "core/centre/presets.h"
+#include "core/project/field_semantics.h"
 #include "ui/setup_widgets.h"
 
 namespace finestra::ui {

@@ -3,8 +3,9 @@
 #include <iostream>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+#include "core/project/evaluate.h"
 #include "core/report/reports.h"
 
 namespace finestra::cli {

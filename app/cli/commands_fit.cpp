@@ -6,8 +6,9 @@
 
 #include "core/common/errors.h"
 #include "core/fit/fit_report.h"
-#include "core/io/project.h"
-#include "core/strain/strain_map_report.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+#include "core/report/strain_map_report.h"
 
 namespace finestra::cli {
 namespace {

@@ -4,7 +4,9 @@
 #include <iostream>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+#include "core/project/field_semantics.h"
 #include "core/planner/plan_report.h"
 
 namespace finestra::cli {
@@ -29,6 +31,7 @@ PlanRequest requestFrom(const Project& project, const CentreModel& model, const 
   PlanRequest request;
   request.settings.classes = project.classes;
   request.targetClass = project.classes.empty() ? 0 : project.classes.front();
+  request.magnet = project.magnet;  // reach directions and magnitudes are magnet settings
   const double projectMagnitude = project.field.labVector(model.setup().lab).norm();
   request.magnitudesT = {projectMagnitude > 0 ? projectMagnitude : 0.5};
   if (!o.requestFile.empty()) request = readPlanRequestFile(o.requestFile, request);
@@ -75,10 +78,10 @@ void addPlanOptions(CLI::App* cmd, PlanOptions& o) {
   cmd->add_option("--objective", o.objective, "figure to rank by (default cyclicity)");
   cmd->add_option("--goal", o.goal, "max or min");
   cmd->add_option("--best", o.best, "number of ranked settings to report");
-  cmd->add_option("--direction-lab", o.directionLab, "profile direction, x,y,z (default: project field)")->delimiter(',');
+  cmd->add_option("--direction-lab", o.directionLab, "profile: true field direction in the lab, x,y,z (default: the project's true field)")->delimiter(',');
   cmd->add_option("--max-T", o.maxT, "profile: largest magnitude (default: the first magnitude)");
   cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(2, 100000));
-  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth (deg)")->check(CLI::Range(0.05, 90.0));
+  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(0.05, 90.0));
 }
 
 int runPlan(const CommonOptions& common, const PlanOptions& o) {
@@ -104,7 +107,7 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
     return 0;
   }
   if (o.what == "profile") {
-    Vec3 direction = project.field.labVector(model->setup().lab);
+    Vec3 direction = trueFieldLab(project, project.field, model->setup().lab);
     if (!o.directionLab.empty()) direction = vectorOption(o.directionLab, "--direction-lab");
     if (direction.norm() == 0) throw InputError("--direction-lab", "needed: the project's field is zero");
     const auto profile = magnitudeProfile(*model, settings, direction, o.maxT.value_or(request.magnitudesT.front()), o.points);

@@ -4,8 +4,9 @@
 #include <sstream>
 
 #include "core/common/errors.h"
-#include "core/fit/spectrum_fit_report.h"
-#include "core/io/project.h"
+#include "core/peaks/spectrum_fit_report.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 #include "core/io/spectrum_csv.h"
 
 namespace finestra::cli {

@@ -6,15 +6,22 @@
 
 namespace finestra {
 
-/// Bad input: a value, key or file the user supplied. `where` names the key path or file:line.
+/// Bad input: a value, key or file the user supplied. `where` names the key path or file:line;
+/// what() is the combined text "where: message" (just the message when `where` is empty).
 class InputError : public std::runtime_error {
 public:
-  InputError(std::string where, const std::string& what)
-      : std::runtime_error(where.empty() ? what : where + ": " + what), where_(std::move(where)) {}
+  InputError(std::string where, std::string message)
+      : std::runtime_error(where.empty() ? message : where + ": " + message), where_(std::move(where)),
+        message_(std::move(message)) {}
   const std::string& where() const { return where_; }
+  /// The key path or file:line at fault (the same as where()).
+  const std::string& keyPath() const { return where_; }
+  /// The message without the key path.
+  const std::string& message() const { return message_; }
 
 private:
   std::string where_;
+  std::string message_;
 };
 
 /// A computation needs a model value that is not known (e.g. a preset marks it "unknown").

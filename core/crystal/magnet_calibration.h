@@ -16,6 +16,8 @@ struct MagnetCalibration {
   Vec3 trueFieldLab(const Vec3& nominalLab) const;
   /// The magnet setting that produces `trueLab` (the inverse of trueFieldLab).
   Vec3 nominalFieldLab(const Vec3& trueLab) const;
+
+  bool operator==(const MagnetCalibration&) const = default;
 };
 
 }  // namespace finestra

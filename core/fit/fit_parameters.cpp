@@ -6,6 +6,7 @@
 #include <set>
 
 #include "core/common/errors.h"
+#include "core/project/field_semantics.h"
 
 namespace finestra {
 namespace {
@@ -169,7 +170,7 @@ ModelSetup fitStateSetup(const FitState& s, const ModelSetup& base) {
 }
 
 Vec3 trueFieldLab(const FitState& s, const Vec3& nominalLab) {
-  return MagnetCalibration{s.fieldScale, s.tiltDeg, s.tiltAzimuthDeg}.trueFieldLab(nominalLab);
+  return finestra::trueFieldLab(MagnetCalibration{s.fieldScale, s.tiltDeg, s.tiltAzimuthDeg}, nominalLab);
 }
 
 }  // namespace finestra

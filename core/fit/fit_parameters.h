@@ -7,7 +7,7 @@
 #include <string>
 #include <vector>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 
 namespace finestra {
 
@@ -64,8 +64,8 @@ std::vector<double> canonicaliseFitState(FitState& state, const std::vector<FitP
 /// The model setup of a state (E-strain magnitudes made non-negative for the engine).
 ModelSetup fitStateSetup(const FitState& state, const ModelSetup& base);
 
-/// True field in the lab frame: field_scale · R(n̂, tilt) · B_nominal with
-/// n̂ = (−sin φt, cos φt, 0), so that the lab z direction tips by the tilt toward azimuth φt.
+/// True field in the lab frame of a magnet setting under the state's calibration
+/// (core/project/field_semantics.h).
 Vec3 trueFieldLab(const FitState& state, const Vec3& nominalLab);
 
 }  // namespace finestra

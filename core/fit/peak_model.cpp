@@ -6,6 +6,7 @@
 #include <limits>
 
 #include "core/common/errors.h"
+#include "core/project/model_setup.h"
 
 namespace finestra {
 namespace {

@@ -1,4 +1,5 @@
 #include "core/fit/synthetic_peaks.h"
+#include "core/project/model_setup.h"
 
 #include <algorithm>
 #include <cmath>

@@ -10,7 +10,7 @@
 #include <string>
 #include <vector>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 
 namespace finestra {
 

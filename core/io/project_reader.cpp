@@ -1,13 +1,11 @@
 // Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
 // non-finite numbers are errors naming the key path.
 #include <cmath>
-#include <filesystem>
-#include <fstream>
-#include <sstream>
 
 #include "core/common/errors.h"
 #include "core/io/json_reader.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
 
 namespace finestra {
 namespace {
@@ -295,17 +293,6 @@ Project parseProject(const std::string& text, const std::string& origin) {
   } catch (const json::exception& e) {
     throw InputError(origin, e.what());
   }
-}
-
-std::string readTextFile(const std::string& path) {
-  std::error_code ec;
-  if (std::filesystem::is_directory(path, ec)) throw InputError(path, "is a folder, not a file");
-  std::ifstream in(path, std::ios::binary);
-  if (!in) throw InputError(path, "cannot open file for reading");
-  std::ostringstream ss;
-  ss << in.rdbuf();
-  if (in.bad()) throw InputError(path, "read error");
-  return ss.str();
 }
 
 Project readProjectFile(const std::string& path) { return parseProject(readTextFile(path), path); }

@@ -1,13 +1,10 @@
 // Writing the version-1 project file, atomically.
 #include <cmath>
-#include <cstdio>
-#include <filesystem>
-#include <fstream>
 #include <nlohmann/json.hpp>
-#include <unistd.h>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
 
 namespace finestra {
 namespace {
@@ -112,33 +109,6 @@ std::string projectToJson(const Project& p) {
   if (const std::string bad = firstNonFinite(doc, ""); !bad.empty())
     throw InputError(bad, "not a finite number; the project was not written");
   return doc.dump(2) + "\n";
-}
-
-void writeFileAtomically(const std::string& path, const std::string& text) {
-  namespace fs = std::filesystem;
-  const fs::path target(path);
-  const fs::path temp = target.parent_path() / (".~" + target.filename().string() + ".tmp");
-  {
-    std::ofstream out(temp, std::ios::binary | std::ios::trunc);
-    if (!out) throw InputError(path, "cannot write here (folder missing or not writable)");
-    out << text;
-    out.flush();
-    if (!out) {
-      std::error_code ec;
-      fs::remove(temp, ec);
-      throw InputError(path, "write failed (disk full?); the previous file is unchanged");
-    }
-  }
-  if (FILE* f = std::fopen(temp.c_str(), "rb")) {  // flush to disk before the rename
-    ::fsync(::fileno(f));
-    std::fclose(f);
-  }
-  std::error_code ec;
-  fs::rename(temp, target, ec);
-  if (ec) {
-    fs::remove(temp, ec);
-    throw InputError(path, "cannot replace the file: " + ec.message() + "; the previous file is unchanged");
-  }
 }
 
 void writeProjectFile(const Project& project, const std::string& path) {

@@ -5,18 +5,10 @@
 // an error; lines starting with '#' are comments.
 #include <optional>
 #include <string>
-#include <vector>
 
-#include "core/units/spectral_units.h"
+#include "core/project/measured_spectrum.h"
 
 namespace finestra {
-
-struct MeasuredSpectrum {
-  std::string name;  ///< file name without folders, for legends
-  SpectralUnit unit = SpectralUnit::THz;
-  std::vector<double> position;  ///< on `unit`
-  std::vector<double> signal;
-};
 
 /// Parses CSV text. `chosenUnit` is used when the header names no unit (and must agree with the
 /// header when both are given). Errors "origin:line: ..." as InputError.

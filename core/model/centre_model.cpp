@@ -6,8 +6,8 @@
 #include <sstream>
 
 #include "core/common/errors.h"
-#include "core/optics/dipole.h"
-#include "core/sweep/tracking.h"
+#include "core/model/dipole.h"
+#include "core/model/tracking.h"
 #include "core/units/linewidth.h"
 
 namespace finestra {

@@ -10,7 +10,7 @@
 #include "core/centre/presets.h"
 #include "core/crystal/frames.h"
 #include "core/hamiltonian/hamiltonian.h"
-#include "core/optics/populations.h"
+#include "core/model/populations.h"
 
 namespace finestra {
 
@@ -18,11 +18,15 @@ namespace finestra {
 struct EgStrain {
   double magnitudeGHz = 0;
   double angleDeg = 0;  ///< ε_Egx = |ε| cos α, ε_Egy = |ε| sin α
+
+  bool operator==(const EgStrain&) const = default;
 };
 
 struct StrainSetting {
   Mat3 crystal = Mat3::Zero();  ///< symmetric strain tensor in crystal axes
   EgStrain extraGround, extraExcited;
+
+  bool operator==(const StrainSetting&) const = default;
 };
 
 struct DetectionConditions {
@@ -31,6 +35,8 @@ struct DetectionConditions {
   Vec3 collectionLab = Vec3(0, 0, 1);
   std::optional<Vec3> analyserLab;  ///< none: unpolarised detection along collectionLab
   double extraBroadeningGHz = 0;    ///< added to the lifetime-limited FWHM
+
+  bool operator==(const DetectionConditions&) const = default;
 };
 
 struct ModelSetup {

@@ -6,7 +6,7 @@
 #include <limits>
 #include <numbers>
 
-#include "core/model/evaluate.h"
+#include "core/project/evaluate.h"
 
 namespace finestra {
 namespace {

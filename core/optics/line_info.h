@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 
 namespace finestra {
 

@@ -5,7 +5,7 @@
 
 #include "core/common/errors.h"
 #include "core/io/json_reader.h"
-#include "core/io/project.h"
+#include "core/io/text_file.h"
 
 namespace finestra {
 namespace {

@@ -7,6 +7,7 @@
 
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
+#include "core/project/field_semantics.h"
 
 namespace finestra {
 namespace {
@@ -44,6 +45,18 @@ void forEachRun(const std::vector<std::uint8_t>& feasible, std::size_t begin, st
     emit(first, k);
     ++k;
   }
+}
+
+// Where the magnet setting of a reachable direction really points. Sphere and plane: the
+// direction is a magnet setting in the lab. Sample rotation: the magnet is set along its axis m̂
+// (calibrated once in the lab), and turning the sample by ψ turns that true field by R(r̂, −ψ) in
+// the sample frame.
+TrueDirection trueReachDirection(const PlanRequest& request, const ReachableDirection& d) {
+  if (request.reach.kind != ReachKind::SampleRotation || request.magnet.isNominal())
+    return trueDirection(request.magnet, d.lab);
+  const TrueDirection axis = trueDirection(request.magnet, request.reach.magnetAxisLab.normalized());
+  const Vec3 r = request.reach.rotationAxisLab.normalized();
+  return {rotationAbout(r, -d.magnetAngleDeg * kDeg) * axis.lab, axis.gain};
 }
 
 }  // namespace
@@ -125,6 +138,8 @@ void validatePlanRequest(const PlanRequest& request) {
     if (std::isnan(c.min) || std::isnan(c.max) || c.min > c.max)
       throw InputError("constraints." + std::string(figureInfo(c.figure).key), "needs min <= max");
   if (request.bestCount < 0) throw InputError("best", "must not be negative");
+  if (!std::isfinite(request.magnet.fieldScale) || request.magnet.fieldScale <= 0)
+    throw InputError("magnet.field_scale", "must be finite and > 0");
 }
 
 PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const ProgressControl& progress) {
@@ -134,8 +149,15 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
   const auto& dirs = result.directions;
   const PlannerKernel kernel(model, request.settings);
   const std::size_t n = dirs.size(), magnitudes = request.magnitudesT.size();
-  std::vector<Vec3> crystal(n);
-  for (std::size_t k = 0; k < n; ++k) crystal[k] = model.setup().lab.toCrystal(dirs[k].lab);
+  // The true field of direction k at magnet magnitude B is B·gain[k] along crystal[k].
+  std::vector<Vec3> trueLab(n), crystal(n);
+  std::vector<double> gain(n);
+  for (std::size_t k = 0; k < n; ++k) {
+    const TrueDirection t = trueReachDirection(request, dirs[k]);
+    trueLab[k] = t.lab;
+    crystal[k] = model.setup().lab.toCrystal(t.lab);
+    gain[k] = t.gain;
+  }
 
   // Target-class figures per (magnitude, direction); all classes are recomputed for the winners.
   std::vector<ClassFigures> target(n * magnitudes);
@@ -150,7 +172,7 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
         progress.progress(static_cast<double>(done.load()) / static_cast<double>(total));
       }
       const auto m = static_cast<std::size_t>(item) / n, k = static_cast<std::size_t>(item) % n;
-      kernel.evaluate(crystal[k], request.magnitudesT[m], figures);
+      kernel.evaluate(crystal[k], request.magnitudesT[m] * gain[k], figures);
       target[static_cast<std::size_t>(item)] = figures[cls];
       done.fetch_add(1, std::memory_order_relaxed);
     }
@@ -209,9 +231,10 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
     RankedSetting s;
     s.magnitudeT = request.magnitudesT[c.magnitude];
     s.direction = dirs[c.direction];
-    s.fieldLabT = s.magnitudeT * s.direction.lab;
-    s.fieldCrystalT = s.magnitudeT * crystal[c.direction];
-    kernel.evaluate(crystal[c.direction], s.magnitudeT, s.figures);
+    const double trueMagnitudeT = s.magnitudeT * gain[c.direction];
+    s.fieldLabT = trueMagnitudeT * trueLab[c.direction];
+    s.fieldCrystalT = trueMagnitudeT * crystal[c.direction];
+    kernel.evaluate(crystal[c.direction], trueMagnitudeT, s.figures);
     s.spinTransitions = hyperfineSpinTransitions(model, request.settings, request.targetClass, s.fieldCrystalT);
     result.best.push_back(std::move(s));
   }

@@ -6,6 +6,7 @@
 #include <vector>
 
 #include "core/common/progress.h"
+#include "core/crystal/magnet_calibration.h"
 #include "core/planner/fast_kernel.h"
 #include "core/planner/reference.h"
 
@@ -42,11 +43,14 @@ struct Objective {
   bool maximise = true;
 };
 
+/// The reach directions and magnitudes are magnet settings; `magnet` (the project's calibration)
+/// turns each into the true field the centres see (core/project/field_semantics.h).
 struct PlanRequest {
   int targetClass = 0;
   PlannerSettings settings;             ///< settings.magnitudeT is the first of magnitudesT
-  std::vector<double> magnitudesT{0.5}; ///< magnitudes tried for every reachable direction
+  std::vector<double> magnitudesT{0.5}; ///< magnet magnitudes tried for every reachable direction
   MagnetReach reach;
+  MagnetCalibration magnet;
   std::vector<Constraint> constraints;
   Objective objective;
   int bestCount = 10;
@@ -80,10 +84,11 @@ struct FeasibleRegion {
   std::vector<FeasibleInterval> intervals;
 };
 
+/// A magnet setting (magnitude and direction as set) and the true field it gives.
 struct RankedSetting {
   double magnitudeT = 0;
   ReachableDirection direction;
-  Vec3 fieldLabT = Vec3::Zero(), fieldCrystalT = Vec3::Zero();
+  Vec3 fieldLabT = Vec3::Zero(), fieldCrystalT = Vec3::Zero();  ///< true field
   std::array<ClassFigures, kClassCount> figures{};
   std::vector<SpinTransition> spinTransitions;  ///< target class, nuclear spin resolved
 };

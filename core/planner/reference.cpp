@@ -5,7 +5,7 @@
 #include <limits>
 #include <numbers>
 
-#include "core/optics/dipole.h"
+#include "core/model/dipole.h"
 
 namespace finestra {
 namespace {

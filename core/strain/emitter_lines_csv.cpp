@@ -7,7 +7,7 @@
 
 #include "core/common/errors.h"
 #include "core/io/csv_line.h"
-#include "core/io/project.h"
+#include "core/io/text_file.h"
 
 namespace finestra {
 namespace {

@@ -9,7 +9,7 @@
 #include <optional>
 #include <string>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/strain/zero_field_strain.h"
 
 namespace finestra {

@@ -3,7 +3,8 @@
 #include <atomic>
 
 #include "core/common/parallel.h"
-#include "core/sweep/tracking.h"
+#include "core/model/tracking.h"
+#include "core/project/sweep_path.h"
 
 namespace finestra {
 namespace {

@@ -4,7 +4,7 @@
 #include <vector>
 
 #include "core/common/progress.h"
-#include "core/io/project.h"
+#include "core/project/project.h"
 
 namespace finestra {
 

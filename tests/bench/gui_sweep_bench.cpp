@@ -3,7 +3,8 @@
 // worker does after every edit. Target: < 100 ms per iteration.
 #include <benchmark/benchmark.h>
 
-#include "core/io/project.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
 #include "ui/plot_data.h"
 
 namespace {

@@ -5,7 +5,7 @@
 
 #include <Eigen/Eigenvalues>
 
-#include "core/io/project.h"
+#include "core/project/model_setup.h"
 #include "core/planner/planner.h"
 
 using namespace finestra;

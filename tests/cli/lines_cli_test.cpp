@@ -5,8 +5,9 @@
 #include <unistd.h>
 
 #include "cli_support.h"
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+#include "core/project/evaluate.h"
 
 using namespace finestra;
 using finestra::testing::runCli;

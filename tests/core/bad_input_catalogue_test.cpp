@@ -13,8 +13,10 @@
 #include "core/common/errors.h"
 #include "core/crystal/frames.h"
 #include "core/io/json_reader.h"
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
+#include "core/project/model_setup.h"
+#include "core/project/evaluate.h"
 #include "core/optics/spectrum.h"
 #include "core/units/spectral_units.h"
 

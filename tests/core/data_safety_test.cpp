@@ -21,7 +21,7 @@
 #include <thread>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
 
 using namespace finestra;
 namespace fs = std::filesystem;

@@ -8,7 +8,7 @@
 
 #include "core/common/progress.h"
 #include "core/fit/project_fit.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
 
 using namespace finestra;
 

@@ -6,7 +6,7 @@
 #include <random>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/project/model_setup.h"
 #include "core/optics/line_grid.h"
 
 using namespace finestra;

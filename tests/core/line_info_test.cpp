@@ -3,8 +3,9 @@
 
 #include <cmath>
 
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/project/model_setup.h"
+#include "core/project/sweep_path.h"
+#include "core/project/evaluate.h"
 #include "core/optics/line_info.h"
 
 namespace finestra {

@@ -8,8 +8,10 @@
 
 #include "core/common/errors.h"
 #include "core/fit/project_fit.h"
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/io/project_file.h"
+#include "core/project/model_setup.h"
+#include "core/project/sweep_path.h"
+#include "core/project/evaluate.h"
 #include "core/sweep/sweep.h"
 
 using namespace finestra;

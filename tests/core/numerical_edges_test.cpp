@@ -10,8 +10,8 @@
 #include <numbers>
 #include <string>
 
-#include "core/io/project.h"
-#include "core/model/evaluate.h"
+#include "core/project/model_setup.h"
+#include "core/project/evaluate.h"
 #include "core/optics/spectrum.h"
 #include "core/report/reports.h"
 #include "core/sweep/sweep.h"

@@ -7,6 +7,7 @@
 #include <random>
 
 #include "core/fit/assignment_trust.h"
+#include "core/project/model_setup.h"
 #include "fit_test_support.h"
 
 namespace finestra {

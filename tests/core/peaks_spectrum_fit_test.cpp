@@ -10,7 +10,7 @@
 #include <random>
 
 #include "core/common/errors.h"
-#include "core/fit/spectrum_fit.h"
+#include "core/peaks/spectrum_fit.h"
 #include "core/peaks/peak_finder.h"
 #include "fit_test_support.h"
 

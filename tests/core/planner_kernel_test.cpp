@@ -6,7 +6,7 @@
 #include <algorithm>
 #include <random>
 
-#include "core/io/project.h"
+#include "core/project/model_setup.h"
 #include "core/planner/fast_kernel.h"
 #include "core/planner/reference.h"
 

@@ -4,7 +4,7 @@
 #include <cmath>
 #include <numbers>
 
-#include "core/io/project.h"
+#include "core/project/model_setup.h"
 #include "core/planner/planner.h"
 #include "core/units/constants.h"
 

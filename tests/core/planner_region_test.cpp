@@ -4,7 +4,7 @@
 
 #include <atomic>
 
-#include "core/io/project.h"
+#include "core/project/model_setup.h"
 #include "core/planner/planner.h"
 
 using namespace finestra;

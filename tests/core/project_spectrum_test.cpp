@@ -3,7 +3,7 @@
 #include <gtest/gtest.h>
 
 #include "core/common/errors.h"
-#include "core/io/project.h"
+#include "core/io/project_file.h"
 
 using namespace finestra;
 

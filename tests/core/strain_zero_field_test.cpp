@@ -9,6 +9,7 @@
 #include "core/common/errors.h"
 #include "core/crystal/frames.h"
 #include "core/strain/zero_field_input.h"
+#include "core/project/model_setup.h"
 #include "test_support.h"
 
 namespace finestra {

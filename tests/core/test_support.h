@@ -4,7 +4,7 @@
 #include <random>
 #include <string>
 
-#include "core/io/project.h"
+#include "core/project/project.h"
 #include "core/model/centre_model.h"
 
 namespace finestra::testing {

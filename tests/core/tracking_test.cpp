@@ -2,6 +2,7 @@
 #include <gtest/gtest.h>
 
 #include "core/sweep/sweep.h"
+#include "core/project/model_setup.h"
 #include "test_support.h"
 
 using namespace finestra;

@@ -8,8 +8,11 @@
 
 #include "core/common/errors.h"
 #include "core/io/peak_csv.h"
-#include "core/model/evaluate.h"
+#include "core/project/evaluate.h"
 #include "core/report/reports.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
+#include "core/project/model_setup.h"
 #include "ui/compute.h"
 #include "ui/headless.h"
 #include "ui/views/line_table_view.h"

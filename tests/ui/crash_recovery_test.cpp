@@ -9,7 +9,7 @@
 #include <QThread>
 #include <gtest/gtest.h>
 
-#include "core/io/project.h"
+#include "core/io/project_file.h"
 #include "ui/autosave.h"
 
 namespace finestra::ui {

@@ -6,6 +6,8 @@
 
 #include "core/common/errors.h"
 #include "core/io/spectrum_csv.h"
+#include "core/io/project_file.h"
+#include "core/io/text_file.h"
 #include "ui/autosave.h"
 #include "ui/document.h"
 

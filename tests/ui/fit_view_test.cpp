@@ -12,6 +12,7 @@
 
 #include "core/common/errors.h"
 #include "core/fit/project_fit.h"
+#include "core/io/project_file.h"
 #include "ui/compute.h"
 #include "ui/document.h"
 #include "ui/fit/fit_view.h"

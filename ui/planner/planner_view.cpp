@@ -16,6 +16,7 @@
 #include <numbers>
 
 #include "core/planner/plan_report.h"
+#include "core/project/field_semantics.h"
 #include "ui/document.h"
 #include "ui/views/plot_helpers.h"
 
@@ -164,7 +165,7 @@ void PlannerView::showEvent(QShowEvent* event) {
 
 Vec3 PlannerView::trueFieldLab() const {
   const Project& p = result_->project;
-  return p.magnet.trueFieldLab(p.field.labVector(result_->model->setup().lab));
+  return finestra::trueFieldLab(p, p.field, result_->model->setup().lab);
 }
 
 void PlannerView::startMap() {
@@ -338,12 +339,10 @@ void PlannerView::onMapClick(QMouseEvent* event) {
     return;
   }
   // The map shows true field directions; the project stores the magnet setting that gives them.
-  const MagnetCalibration& magnet = context().document->project().magnet;
-  const Vec3 nominal = magnet.nominalFieldLab(magnitudeBox_->value() * directionFromAngles(polar, azimuth));
-  const auto angles = anglesOfDirection(nominal);
-  context().document->edit(tr("Field direction from the planner map"), Change::Field, [&](Project& p) {
-    p.field = FieldSetting::fromAngles(nominal.norm(), angles[0], angles[1]);
-  });
+  const FieldSetting setting = magnetSettingForTrueField(context().document->project(),
+                                                         magnitudeBox_->value() * directionFromAngles(polar, azimuth));
+  context().document->edit(tr("Field direction from the planner map"), Change::Field,
+                           [&](Project& p) { p.field = setting; });
 }
 
 Table PlannerView::dataTable() const {

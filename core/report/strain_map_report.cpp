@@ -1,4 +1,4 @@
-#include "core/strain/strain_map_report.h"
+#include "core/report/strain_map_report.h"
 
 #include <cmath>
 #include <cstdio>

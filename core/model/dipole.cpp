@@ -1,4 +1,4 @@
-#include "core/optics/dipole.h"
+#include "core/model/dipole.h"
 
 namespace finestra {
 

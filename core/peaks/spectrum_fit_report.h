@@ -2,7 +2,7 @@
 // Spectrum-fit results as JSON and as a text table (same layout as the peak fit's parameters).
 #include <nlohmann/json.hpp>
 
-#include "core/fit/spectrum_fit.h"
+#include "core/peaks/spectrum_fit.h"
 #include "core/report/table.h"
 
 namespace finestra {

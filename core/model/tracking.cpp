@@ -1,4 +1,4 @@
-#include "core/sweep/tracking.h"
+#include "core/model/tracking.h"
 
 #include <algorithm>
 #include <numeric>

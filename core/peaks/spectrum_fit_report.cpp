@@ -1,4 +1,4 @@
-#include "core/fit/spectrum_fit_report.h"
+#include "core/peaks/spectrum_fit_report.h"
 
 #include <cmath>
 #include <cstdio>

@@ -1,6 +1,9 @@
 #pragma once
-// The project: everything a user sets up, as stored in the project file (architecture.md,
-// "finestra-project" version 1). Plain data; the engine is built from it with makeModelSetup().
+// The project: everything a user sets up, as plain value types (docs/architecture.md, Project).
+// Stored by core/io/project_file.h; the engine is built from it with makeModelSetup()
+// (core/project/model_setup.h); magnet settings become true fields only through
+// core/project/field_semantics.h. Every part compares with ==, so a change can be found by
+// comparing parts.
 #include <map>
 #include <optional>
 #include <string>
@@ -8,7 +11,7 @@
 
 #include "core/model/centre_model.h"
 #include "core/crystal/magnet_calibration.h"
-#include "core/io/spectrum_csv.h"
+#include "core/project/measured_spectrum.h"
 #include "core/units/spectral_units.h"
 
 namespace finestra {
@@ -19,11 +22,15 @@ struct CentreChoice {
   std::string preset = "SiV-";
   std::optional<std::string> isotope;
   std::map<std::string, double> overrides;  ///< parameter key → value (user-set)
+
+  bool operator==(const CentreChoice&) const = default;
 };
 
 struct SampleSetting {
   Vec3 normal = Vec3(0, 0, 1);
   Vec3 inPlaneX = Vec3(1, 1, 0);
+
+  bool operator==(const SampleSetting&) const = default;
 };
 
 /// A magnet setting as the user gave it: magnitude and lab angles, or a vector in lab or crystal axes.
@@ -36,6 +43,8 @@ struct FieldSetting {
   Vec3 labVector(const LabFrame& lab) const;
   Vec3 crystalVector(const LabFrame& lab) const;
   static FieldSetting fromAngles(double magnitudeT, double polarDeg, double azimuthDeg);
+
+  bool operator==(const FieldSetting&) const = default;
 };
 
 enum class SweepKind { Magnitude, Angle, Strain };
@@ -52,10 +61,14 @@ struct SweepSpec {
   Vec3 planeNormalLab = Vec3(0, 1, 0);
   Vec3 startLab = Vec3(0, 0, 1);
   Mat3 strainTo = Mat3::Zero();
+
+  bool operator==(const SweepSpec&) const = default;
 };
 
 struct PinnedAssignment {
   int cls = 0, upper = 0, lower = 0;
+
+  bool operator==(const PinnedAssignment&) const = default;
 };
 
 struct MeasuredPeak {
@@ -64,6 +77,8 @@ struct MeasuredPeak {
   double sigma = 0;  ///< uncertainty in the same unit (> 0)
   std::optional<Vec3> analyserLab;
   std::optional<PinnedAssignment> assign;
+
+  bool operator==(const MeasuredPeak&) const = default;
 };
 
 struct MeasurementSet {
@@ -71,11 +86,15 @@ struct MeasurementSet {
   double temperatureK = 4.0;
   FieldSetting field;
   std::vector<MeasuredPeak> peaks;
+
+  bool operator==(const MeasurementSet&) const = default;
 };
 
 struct FitSettings {
   std::vector<std::string> free;
   int starts = 8;
+
+  bool operator==(const FitSettings&) const = default;
 };
 
 struct Project {
@@ -92,35 +111,11 @@ struct Project {
   /// An imported measured spectrum, kept in the project so that it survives save and open.
   std::optional<MeasuredSpectrum> measuredSpectrum;
   std::string description;  ///< free text, e.g. the scenario of a demo project
+
+  bool operator==(const Project&) const = default;
 };
 
-/// Parses a project document. `origin` (a file name) prefixes every error message.
-Project parseProject(const std::string& text, const std::string& origin);
-/// Reads a project file; errors name the file (and line for syntax errors, key path otherwise).
-Project readProjectFile(const std::string& path);
-/// Serialises to the version-1 JSON layout (pretty-printed). A non-finite number (JSON has none)
-/// throws InputError naming its key path.
-std::string projectToJson(const Project& project);
-/// Writes atomically: a temporary file in the same folder, flushed, then renamed over `path`.
-/// On failure the previous file is untouched and InputError names the path.
-void writeProjectFile(const Project& project, const std::string& path);
-/// Writes text atomically (see writeProjectFile).
-void writeFileAtomically(const std::string& path, const std::string& text);
-/// Reads a whole file; InputError naming the path if it cannot be read.
-std::string readTextFile(const std::string& path);
-
-/// The true field (crystal frame, T) of the project's magnet setting: the calibration applied.
-Vec3 projectFieldCrystal(const Project& project, const LabFrame& lab);
-
-/// Resolves the centre and frames; throws InputError/MissingValueError naming the key at fault.
-ModelSetup makeModelSetup(const Project& project);
-
-/// True field (crystal frame, T; the magnet calibration applied to the nominal sweep path) at
-/// parameter value `x` of a sweep, and the strain there.
-Vec3 sweepField(const Project& project, const SweepSpec& sweep, const LabFrame& lab, double x);
-Mat3 sweepStrain(const Project& project, const SweepSpec& sweep, double x);
-
-/// Symmetric tensor from the six components (xx, yy, zz, yz, zx, xy).
+/// Symmetric strain tensor from the six components as the project stores them (xx, yy, zz, yz, zx, xy).
 Mat3 strainFromComponents(double xx, double yy, double zz, double yz, double zx, double xy);
 
 }  // namespace finestra

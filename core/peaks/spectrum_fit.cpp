@@ -1,4 +1,4 @@
-#include "core/fit/spectrum_fit.h"
+#include "core/peaks/spectrum_fit.h"
 
 #include <algorithm>
 #include <cmath>

@@ -1,4 +1,4 @@
-#include "core/optics/populations.h"
+#include "core/model/populations.h"
 
 #include <cmath>
 

@@ -1,6 +1,7 @@
-#include "core/model/evaluate.h"
+#include "core/project/evaluate.h"
 
 #include "core/common/parallel.h"
+#include "core/project/field_semantics.h"
 
 namespace finestra {
 
