@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # One command for the performance report: builds every Google Benchmark program in tests/bench
-# (Release), runs each of them and the NumPy baseline (/work/shared/bench/numpy_baseline.py, or
+# (Release), runs each of them and the NumPy baseline (tests/bench/numpy_baseline.py, or
 # FINESTRA_NUMPY_BASELINE) in the same run, and prints one table with the machine. Benchmarks that
 # report class-points per second (counter class_points_per_s: one field direction × one orientation
 # class, both manifolds and all lines, the baseline's unit of work) get the ratio to NumPy.
@@ -9,7 +9,7 @@ set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
 build="${1:-$root/build/release}"
 directions="${2:-20000}"
-baseline="${FINESTRA_NUMPY_BASELINE:-/work/shared/bench/numpy_baseline.py}"
+baseline="${FINESTRA_NUMPY_BASELINE:-$root/tests/bench/numpy_baseline.py}"
 python=/usr/bin/python3
 
 cmake -S "$root" -B "$build" -G Ninja -DCMAKE_BUILD_TYPE=Release -DFINESTRA_BUILD_BENCH=ON >/dev/null

@@ -10,6 +10,8 @@ packages=(
   libgtest-dev libgmock-dev libbenchmark-dev
   clang-14 libclang-rt-14-dev
   xvfb xauth python3 python3-numpy
+  pybind11-dev python3-dev python3-pytest python3-matplotlib
+  dpkg-dev appstream desktop-file-utils shared-mime-info libglib2.0-bin
 )
 if [[ $(id -u) -eq 0 ]]; then sudo=(); else sudo=(sudo); fi
 export DEBIAN_FRONTEND=noninteractive

@@ -6,6 +6,7 @@ set -euo pipefail
 root="$(cd "$(dirname "$0")/.." && pwd)"
 cd "$root"
 if [[ "${FINESTRA_SKIP_DEPS:-0}" != 1 ]]; then scripts/install-deps.sh; fi
-cmake --preset release
+# FINESTRA_WERROR=ON in the environment (CI) turns compiler warnings into errors.
+cmake --preset release ${FINESTRA_WERROR:+-DFINESTRA_WERROR=$FINESTRA_WERROR}
 cmake --build --preset release -j"$(nproc)"
 QT_QPA_PLATFORM=offscreen ctest --preset release -j"$(nproc)" --timeout 900

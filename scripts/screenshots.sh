@@ -33,6 +33,8 @@ fitted="$recovery/fit-demo-fitted.json"
 "$(dirname "$app")/../cli/finestra-cli" fit "$root/examples/fit-demo.json" --write-project "$fitted" >/dev/null
 project="$fitted" shot fit window-fit
 shot planner window-planner --screenshot-delay 4000
+project="$root/examples/siv29-microwave.json" shot microwave window-microwave
+project="$root/examples/siv29-microwave.json" shot lambda window-lambda
 "$app" --project "$project" --export-view lines --out "$out/figure-lines.png" --import-peaks "$peaks"
 "$app" --project "$project" --export-view levels --out "$out/figure-levels.png"
 "$app" --project "$project" --export-view spectrum --out "$out/figure-spectrum.png" --import-spectrum "$spectrum"

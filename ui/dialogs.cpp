@@ -13,9 +13,8 @@
 #include <spdlog/version.h>
 #include <nlohmann/json.hpp>
 
-#ifndef FINESTRA_VERSION
-#define FINESTRA_VERSION "unknown"
-#endif
+#include "core/common/version.h"
+
 
 namespace finestra::ui {
 
@@ -44,7 +43,7 @@ AboutDialog::AboutDialog(QWidget* parent) : QDialog(parent) {
                    "magnetic field and strain.</p><p>Built with Qt %2 (running %3), QCustomPlot %4, Eigen %5.%6.%7, "
                    "spdlog %8.%9.%10, nlohmann-json %11.%12.%13.</p><p>Preset values carry their source and status; "
                    "values marked <i>from memory</i> or <i>assumed</i> should be checked before use.</p>")
-                    .arg(FINESTRA_VERSION, QT_VERSION_STR, qVersion(), QCUSTOMPLOT_VERSION_STR)
+                    .arg(QString::fromUtf8(kVersion.data(), static_cast<qsizetype>(kVersion.size())), QT_VERSION_STR, qVersion(), QCUSTOMPLOT_VERSION_STR)
                     .arg(EIGEN_WORLD_VERSION).arg(EIGEN_MAJOR_VERSION).arg(EIGEN_MINOR_VERSION)
                     .arg(SPDLOG_VER_MAJOR).arg(SPDLOG_VER_MINOR).arg(SPDLOG_VER_PATCH)
                     .arg(NLOHMANN_JSON_VERSION_MAJOR).arg(NLOHMANN_JSON_VERSION_MINOR).arg(NLOHMANN_JSON_VERSION_PATCH) +

@@ -8,7 +8,7 @@
 
 namespace finestra::ui {
 
-/// The safety cautions shown in the About dialog (physics.md §9).
+/// The safety cautions shown in the About dialog (README.md, Safety cautions).
 QString safetyCautionsHtml();
 
 class AboutDialog : public QDialog {

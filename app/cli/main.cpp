@@ -9,7 +9,10 @@
 #include "app/cli/commands_peaks.h"
 #include "app/cli/commands_plan.h"
 #include "app/cli/commands_spectrum_fit.h"
+#include "app/cli/commands_thermal.h"
+#include "app/cli/commands_resonance.h"
 #include "core/common/errors.h"
+#include "core/common/version.h"
 
 using namespace finestra::cli;
 
@@ -26,6 +29,7 @@ void addProjectOptions(CLI::App* cmd, CommonOptions& options) {
 
 int main(int argc, char** argv) {
   CLI::App app{"finestra-cli: fine structure of group-IV vacancy centres in diamond"};
+  app.set_version_flag("--version", std::string(finestra::kVersion), "print the Finestra version and exit");
   app.require_subcommand(1);
   CommonOptions common;
   OutputFormat presetFormat = OutputFormat::Table;
@@ -65,6 +69,20 @@ int main(int argc, char** argv) {
   addProjectOptions(strainCmd, common);
   strainCmd->get_option("project")->required(false);
   addStrainOptions(strainCmd, strainOptions);
+  MicrowaveOptions microwaveOptions;
+  auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
+  addProjectOptions(microwaveCmd, common);
+  addMicrowaveOptions(microwaveCmd, microwaveOptions);
+  LambdaOptions lambdaOptions;
+  auto* lambdaCmd = app.add_subcommand("lambda-systems", "Lambda systems: excited levels linked to two ground levels by allowed lines");
+  addProjectOptions(lambdaCmd, common);
+  addLambdaOptions(lambdaCmd, lambdaOptions);
+
+  ThermalOptions thermalOptions;
+  auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
+  addProjectOptions(thermalCmd, common);
+  addThermalOptions(thermalCmd, thermalOptions);
+
   PeaksCommandOptions peaksOptions;
   auto* peaksCmd = app.add_subcommand("peaks", "find and fit the peaks of a measured spectrum CSV (exit 4: fit not converged)");
   addPeaksOptions(peaksCmd, peaksOptions);
@@ -87,6 +105,9 @@ int main(int argc, char** argv) {
     if (*planCmd) return runPlan(common, plan);
     if (*fitCmd) return runFit(common, fitOptions);
     if (*strainCmd) return runStrain(common, strainOptions);
+    if (*thermalCmd) return runThermal(common, thermalOptions);
+    if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
+    if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
     if (*peaksCmd) return runPeaks(peaksOptions);
     if (*spectrumFitCmd) return runSpectrumFit(common, spectrumFitOptions);
   } catch (const finestra::InputError& e) {

@@ -42,6 +42,19 @@ const std::array<ParamInfo, kParamCount>& paramTable() {
       {Param::APerpU, "A_perp_u_MHz", "MHz", "hyperfine A perpendicular, excited", true},
       {Param::NuclearSpin, "nuclear_spin", "", "nuclear spin I of the isotope (0 without)", true},
       {Param::GammaN, "gamma_n_MHz_per_T", "MHz/T", "nuclear gyromagnetic ratio (signed)", true},
+      {Param::PhononChiG, "phonon_chi_g_per_s_GHz3", "1/(s GHz^3)",
+       "single-phonon coupling, ground: downward rate = chi D^3 (n+1), upward = chi D^3 n", false},
+      {Param::PhononChiU, "phonon_chi_u_per_s_GHz3", "1/(s GHz^3)",
+       "single-phonon coupling, excited: downward rate = chi D^3 (n+1), upward = chi D^3 n", false},
+      {Param::HigherOrderCoefG, "phonon_ho_coef_g_per_s", "1/s", "higher-order phonon rate at 1 K, ground (rate = c (T/1 K)^p)", false},
+      {Param::HigherOrderPowerG, "phonon_ho_power_g", "", "temperature power p of the higher-order phonon rate, ground", false},
+      {Param::HigherOrderCoefU, "phonon_ho_coef_u_per_s", "1/s", "higher-order phonon rate at 1 K, excited (rate = c (T/1 K)^p)", false},
+      {Param::HigherOrderPowerU, "phonon_ho_power_u", "", "temperature power p of the higher-order phonon rate, excited", false},
+      {Param::ZplShiftCoef, "zpl_shift_coef_GHz", "GHz", "thermal ZPL shift at 1 K (shift = c (T/1 K)^p)", false},
+      {Param::ZplShiftPower, "zpl_shift_power", "", "temperature power p of the thermal ZPL shift", false},
+      {Param::DebyeWaller, "debye_waller", "", "fraction of the emission in the zero-phonon lines", false},
+      {Param::SidebandShiftMeV, "sideband_shift_meV", "meV", "phonon sideband feature: distance below the ZPL", false},
+      {Param::SidebandFwhmMeV, "sideband_fwhm_meV", "meV", "phonon sideband feature: full width at half maximum", false},
   }};
   return table;
 }
@@ -58,7 +71,9 @@ double CentreParameters::require(Param p) const {
   const double v = get(p);
   if (!std::isfinite(v))
     throw MissingValueError(std::string(paramInfo(p).key),
-                            "value is unknown for this centre; set it under centre.parameters");
+                            std::string(paramInfo(p).meaning) +
+                                " is unknown for this centre: set it in the Setup panel, Centre parameter table, row '" +
+                                std::string(paramInfo(p).key) + "', or mark an assumed value there");
   return v;
 }
 
@@ -70,6 +85,7 @@ int CentreParameters::nuclearDimension() const {
 void CentreParameters::validateForComputation() const {
   for (const ParamInfo& info : paramTable()) {
     if (info.hyperfine && !hasNuclearSpin() && info.id != Param::NuclearSpin) continue;
+    if (isPhononParam(info.id)) continue;  // required by the thermal figures only
     if (info.id == Param::NuclearSpin && !known(info.id)) continue;  // no isotope
     require(info.id);
   }

@@ -1,6 +1,7 @@
 #pragma once
 // Centre parameters: the named numbers that define one group-IV centre model, with units in their
-// keys (architecture.md). A value not known is stored as NaN and must be set before a computation
+// keys (docs/architecture.md, Parameters and limits).
+// A value not known is stored as NaN and must be set before a computation
 // that needs it (require() throws MissingValueError naming the key).
 #include <array>
 #include <cmath>
@@ -18,6 +19,9 @@ enum class Param : int {
   TperpG, TparG, DG, FG, TperpU, TparU, DU, FU,
   DipoleRatio, LifetimeNs,
   AParG, APerpG, AParU, APerpU, NuclearSpin, GammaN,
+  // Phonon model (docs/physics.md, Phonons): needed only by rates, linewidths and sidebands.
+  PhononChiG, PhononChiU, HigherOrderCoefG, HigherOrderPowerG, HigherOrderCoefU, HigherOrderPowerU,
+  ZplShiftCoef, ZplShiftPower, DebyeWaller, SidebandShiftMeV, SidebandFwhmMeV,
   Count
 };
 inline constexpr int kParamCount = static_cast<int>(Param::Count);
@@ -32,6 +36,9 @@ struct ParamInfo {
 
 const std::array<ParamInfo, kParamCount>& paramTable();
 const ParamInfo& paramInfo(Param p);
+/// True for the constants of the phonon model: the level engine never needs them, so an unknown
+/// one blocks only the thermal figures (rates, linewidths, sideband), not levels and lines.
+inline bool isPhononParam(Param p) { return p >= Param::PhononChiG && p < Param::Count; }
 /// Finds a parameter by key; std::nullopt for an unknown key.
 std::optional<Param> findParam(std::string_view key);
 

@@ -57,6 +57,8 @@ Preset parsePreset(const std::string& text, const std::string& origin) {
     Preset p;
     p.name = doc.at("name").get<std::string>();
     p.title = doc.at("title").get<std::string>();
+    p.zplReference = doc.value("zpl_reference", std::string());
+    p.notes = doc.value("notes", std::string());
     for (auto& [key, value] : doc.at("parameters").items()) {
       const auto id = findParam(key);
       if (!id || paramInfo(*id).hyperfine)
@@ -137,6 +139,20 @@ ResolvedCentre resolveCentre(const std::string& presetName, const std::optional<
     if (prov.status != ValueStatus::NotUsed) out.parameters.set(info.id, prov.value);
   }
   return out;
+}
+
+void applyAssumedValues(ResolvedCentre& centre, const std::map<std::string, double>& assumed) {
+  for (const auto& [key, value] : assumed) {
+    const auto id = findParam(key);
+    if (!id) throw InputError("centre.assumed." + key, "unknown parameter key");
+    if (!std::isfinite(value)) throw InputError("centre.assumed." + key, "not a finite number");
+    auto& prov = centre.provenance[static_cast<std::size_t>(*id)];
+    prov.value = value;
+    prov.unit = std::string(paramInfo(*id).unit);
+    prov.status = ValueStatus::Assumed;
+    prov.source = "assumed in the project file";
+    centre.parameters.set(*id, value);
+  }
 }
 
 }  // namespace finestra

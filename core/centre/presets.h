@@ -29,6 +29,8 @@ struct ValueProvenance {
 struct Preset {
   std::string name;   ///< e.g. "SiV-"
   std::string title;  ///< human-readable
+  std::string zplReference;  ///< what the ZPL value is (centroid, which line, which temperature)
+  std::string notes;         ///< choices between published families, alternatives
   std::array<ValueProvenance, kParamCount> values;  ///< hyperfine entries NotUsed
   std::map<std::string, std::array<std::optional<ValueProvenance>, kParamCount>> isotopes;
 };
@@ -52,5 +54,9 @@ struct ResolvedCentre {
 /// Throws InputError for an unknown preset, isotope or override key.
 ResolvedCentre resolveCentre(const std::string& presetName, const std::optional<std::string>& isotope,
                              const std::map<std::string, double>& overrides);
+
+/// Sets explicitly assumed values (key → value) with status "assumed" and source "assumed in the
+/// project file". Throws InputError naming centre.assumed.<key> for an unknown key.
+void applyAssumedValues(ResolvedCentre& centre, const std::map<std::string, double>& assumed);
 
 }  // namespace finestra

@@ -1,5 +1,5 @@
 #pragma once
-// Crystal, defect and lab frames (physics.md §2).
+// Crystal, defect and lab frames (docs/physics.md, Frames).
 //
 // A frame is stored as a rotation matrix whose rows are the frame's unit axes written in crystal
 // coordinates, so that v_frame = F v_crystal and v_crystal = Fᵀ v_frame.

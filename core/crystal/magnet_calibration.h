@@ -1,6 +1,6 @@
 #pragma once
 // The magnet's calibration: what the field really is when the magnet is set to B_nominal
-// (architecture.md, "Magnet tilt"): B_true = field_scale · R(n̂, tilt) · B_nominal in the lab frame,
+// (docs/physics.md, Magnet calibration): B_true = field_scale · R(n̂, tilt) · B_nominal in the lab frame,
 // n̂ = (−sin φt, cos φt, 0), so the nominal lab z direction tips by the tilt toward azimuth φt.
 // A fit finds it; the project keeps it, and every computation from a magnet setting applies it.
 #include "core/common/types.h"

@@ -1,5 +1,5 @@
 #pragma once
-// The parameters a fit may vary (architecture.md, "Measurements and fits"): every centre
+// The parameters a fit may vary (docs/physics.md, Fit): every centre
 // parameter key, the crystal strain components, the magnet calibration (scale and tilt), a ZPL
 // offset and the per-manifold E-strain. A FitState holds the value of all of them; a
 // FitParameterSpec reads and writes one of them by name.

@@ -1,5 +1,5 @@
 #pragma once
-// Fit and strain results as JSON (architecture.md layouts) and as text tables.
+// Fit and strain results as JSON (docs/architecture.md, Machine-readable output) and as text tables.
 #include <nlohmann/json.hpp>
 
 #include "core/fit/project_fit.h"

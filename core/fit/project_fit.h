@@ -2,7 +2,7 @@
 // Fitting a project to its measurements: alternate assignment and least squares until the
 // assignment is stable, from several starts; report values, standard errors (formal, and scaled
 // by √(χ²/dof) when χ²/dof > 1), correlations, χ²/dof, the residual of every peak and the parameters the data leave
-// undetermined (physics.md §6: line positions fix E-strain only through its magnitude).
+// undetermined (docs/physics.md, What line positions tell about strain).
 #include <optional>
 #include <string>
 #include <vector>

@@ -1,5 +1,5 @@
 #pragma once
-// Hamiltonian of one manifold and its diagonalisation (physics.md §3).
+// Hamiltonian of one manifold and its diagonalisation (docs/physics.md, Hamiltonian of one manifold).
 // Basis: orbital {x, y} ⊗ spin {↑, ↓} ⊗ nuclear {m_I = I, I−1, …, −I}; without an isotope the
 // nuclear factor is absent and the basis is |x↑⟩, |x↓⟩, |y↑⟩, |y↓⟩.
 #include "core/common/types.h"

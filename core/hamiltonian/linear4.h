@@ -1,7 +1,7 @@
 #pragma once
 // Closed forms for the 4×4 electronic Hamiltonian of one manifold and one orientation class.
 //
-// The 4×4 Hamiltonian of a manifold is linear in B (physics.md §3), so it is sampled once per class
+// The 4×4 Hamiltonian of a manifold is linear in B (docs/physics.md, Diagonalisation), so it is sampled once per class
 // through the public electronicHamiltonian() and then rebuilt at any field as a fixed-size linear
 // combination. The anticrossing scan over 0..|B| needs only eigenvalues; for it the Hamiltonian is
 // written in Pauli components, H = e0 + o·σ⊗1 + 1⊗b·s + c σ_y⊗s_z, whose characteristic polynomial

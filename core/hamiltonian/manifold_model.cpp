@@ -39,7 +39,7 @@ StrainTerms strainTerms(const ManifoldModel& m, const Mat3& e) {
 }
 
 double zeroFieldSplitting(const ManifoldModel& m, const StrainTerms& s) {
-  // The σ_z coefficient is Υx − ε_Egx and the σ_x coefficient Υy + ε_Egy (physics.md §3).
+  // The σ_z coefficient is Υx − ε_Egx and the σ_x coefficient Υy + ε_Egy (docs/physics.md, Strain).
   const double cz = m.jtX - s.egx;
   const double cx = m.jtY + s.egy;
   return std::sqrt(m.lambda * m.lambda + 4.0 * (cz * cz + cx * cx));

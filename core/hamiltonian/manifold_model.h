@@ -1,5 +1,6 @@
 #pragma once
-// The numbers that enter one manifold's Hamiltonian (physics.md §3), in GHz and tesla.
+// The numbers that enter one manifold's Hamiltonian (docs/physics.md, Hamiltonian of one manifold),
+// in GHz and tesla.
 #include "core/centre/parameters.h"
 #include "core/common/types.h"
 
@@ -21,7 +22,7 @@ struct ManifoldModel {
 ManifoldModel manifoldModel(const CentreParameters& p, Manifold m);
 
 /// Orbital strain terms of one manifold, GHz: the coefficients of 1, σ_z and σ_x
-/// (a1g·1 − egx·σ_z + egy·σ_x, physics.md §3).
+/// (a1g·1 − egx·σ_z + egy·σ_x, docs/physics.md, Strain).
 struct StrainTerms {
   double a1g = 0, egx = 0, egy = 0;
   double egMagnitude() const;

@@ -1,4 +1,4 @@
-// Reading the version-1 project file (architecture.md) strictly: unknown keys, wrong types and
+// Reading the version-1 project file (docs/architecture.md, Project file) strictly: unknown keys, wrong types and
 // non-finite numbers are errors naming the key path.
 #include <cmath>
 
@@ -11,18 +11,39 @@ namespace finestra {
 namespace {
 using nlohmann::json;
 
+ZplAnchor readZplAnchor(const JsonObjectReader& r) {
+  r.allowOnly({"line", "wavelength_nm", "medium", "temperature_K"});
+  ZplAnchor a;
+  const std::string line = r.string("line");
+  if (line.size() != 1 || line[0] < 'A' || line[0] > 'D') throw InputError(r.keyPath("line"), "expected \"A\", \"B\", \"C\" or \"D\"");
+  a.line = line[0];
+  a.wavelengthNm = r.number("wavelength_nm");
+  if (!(a.wavelengthNm > 100 && a.wavelengthNm < 2000))
+    throw InputError(r.keyPath("wavelength_nm"), "must lie between 100 and 2000 nm");
+  const std::string medium = r.string("medium", "vacuum");
+  if (medium != "vacuum" && medium != "air") throw InputError(r.keyPath("medium"), "expected \"vacuum\" or \"air\"");
+  a.air = medium == "air";
+  a.temperatureK = r.number("temperature_K", 4.0);
+  if (!(a.temperatureK >= 0 && a.temperatureK <= 1000))
+    throw InputError(r.keyPath("temperature_K"), "must lie between 0 and 1000 K");
+  return a;
+}
+
 CentreChoice readCentre(const JsonObjectReader& r) {
-  r.allowOnly({"preset", "isotope", "parameters"});
+  r.allowOnly({"preset", "isotope", "parameters", "assumed", "zpl_anchor"});
   CentreChoice c;
   c.preset = r.string("preset");
   c.isotope = r.optionalString("isotope");
-  if (r.has("parameters")) {
-    const JsonObjectReader params = r.object("parameters");
-    for (const auto& [key, value] : r.raw("parameters").items()) {
+  for (const char* section : {"parameters", "assumed"}) {
+    if (!r.has(section)) continue;
+    const JsonObjectReader params = r.object(section);
+    auto& target = std::string(section) == "parameters" ? c.overrides : c.assumed;
+    for (const auto& [key, value] : r.raw(section).items()) {
       if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
-      c.overrides[key] = finiteNumber(value, params.keyPath(key));
+      target[key] = finiteNumber(value, params.keyPath(key));
     }
   }
+  if (!r.isNull("zpl_anchor")) c.zplAnchor = readZplAnchor(r.object("zpl_anchor"));
   return c;
 }
 
@@ -88,7 +109,8 @@ StrainSetting readStrain(const JsonObjectReader& r) {
 }
 
 DetectionConditions readConditions(const JsonObjectReader& r) {
-  r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz"});
+  r.allowOnly({"temperature_K", "populations", "collection_lab", "analyser_lab", "broadening_GHz", "phonon_sideband",
+               "bath_t2star_s"});
   DetectionConditions c;
   c.temperatureK = r.number("temperature_K", c.temperatureK);
   if (c.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
@@ -100,6 +122,12 @@ DetectionConditions readConditions(const JsonObjectReader& r) {
   c.analyserLab = r.optionalVec3("analyser_lab");
   c.extraBroadeningGHz = r.number("broadening_GHz", 0.0);
   if (c.extraBroadeningGHz < 0) throw InputError(r.keyPath("broadening_GHz"), "must not be negative");
+  c.phononSideband = r.boolean("phonon_sideband", false);
+  if (!r.isNull("bath_t2star_s")) {
+    c.bathT2StarS = r.number("bath_t2star_s");
+    if (!(*c.bathT2StarS > 0 && *c.bathT2StarS <= 1e6))
+      throw InputError(r.keyPath("bath_t2star_s"), "must be a positive number of seconds, at most 1e6");
+  }
   return c;
 }
 
@@ -126,13 +154,16 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   if (kind == "magnitude") s.kind = SweepKind::Magnitude;
   else if (kind == "angle") s.kind = SweepKind::Angle;
   else if (kind == "strain") s.kind = SweepKind::Strain;
-  else throw InputError(r.keyPath("kind"), "expected \"magnitude\", \"angle\" or \"strain\"");
+  else if (kind == "temperature") s.kind = SweepKind::Temperature;
+  else throw InputError(r.keyPath("kind"), "expected \"magnitude\", \"angle\", \"strain\" or \"temperature\"");
   s.from = r.number("from");
   s.to = r.number("to");
   s.points = r.integer("points", s.points);
   if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
+  if (s.kind == SweepKind::Temperature && !(s.from >= 0 && s.to >= 0 && s.from <= 1000 && s.to <= 1000))
+    throw InputError(r.keyPath("from"), "temperatures must lie between 0 and 1000 K");
   if (s.kind == SweepKind::Magnitude) {
     requireFieldInRange(s.from, r.keyPath("from"));
     requireFieldInRange(s.to, r.keyPath("to"));

@@ -28,7 +28,7 @@ ordered field(const FieldSetting& f) {
 }
 
 ordered sweep(const SweepSpec& s) {
-  static const char* kinds[] = {"magnitude", "angle", "strain"};
+  static const char* kinds[] = {"magnitude", "angle", "strain", "temperature"};
   ordered o{{"name", s.name}, {"kind", kinds[static_cast<int>(s.kind)]}, {"from", s.from}, {"to", s.to},
             {"points", s.points}};
   if (s.kind == SweepKind::Angle) {
@@ -71,6 +71,14 @@ std::string projectToJson(const Project& p) {
   doc["centre"] = ordered{{"preset", p.centre.preset},
                           {"isotope", p.centre.isotope ? ordered(*p.centre.isotope) : ordered(nullptr)},
                           {"parameters", params}};
+  if (!p.centre.assumed.empty()) {
+    ordered assumed = ordered::object();
+    for (const auto& [k, v] : p.centre.assumed) assumed[k] = v;
+    doc["centre"]["assumed"] = assumed;
+  }
+  if (const auto& a = p.centre.zplAnchor)
+    doc["centre"]["zpl_anchor"] = ordered{{"line", std::string(1, a->line)}, {"wavelength_nm", a->wavelengthNm},
+                                          {"medium", a->air ? "air" : "vacuum"}, {"temperature_K", a->temperatureK}};
   doc["sample"] = ordered{{"normal", vec(p.sample.normal)}, {"in_plane_x", vec(p.sample.inPlaneX)}};
   doc["field"] = field(p.field);
   if (!p.magnet.isNominal())
@@ -88,6 +96,8 @@ std::string projectToJson(const Project& p) {
                               {"collection_lab", vec(c.collectionLab)},
                               {"analyser_lab", c.analyserLab ? vec(*c.analyserLab) : ordered(nullptr)},
                               {"broadening_GHz", c.extraBroadeningGHz}};
+  if (c.phononSideband) doc["conditions"]["phonon_sideband"] = true;
+  if (c.bathT2StarS) doc["conditions"]["bath_t2star_s"] = *c.bathT2StarS;
   doc["classes"] = p.classes;
   ordered sweeps = ordered::array();
   for (const auto& s : p.sweeps) sweeps.push_back(sweep(s));

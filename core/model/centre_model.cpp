@@ -13,11 +13,17 @@
 namespace finestra {
 namespace {
 
+constexpr double kMaxTemperatureK = 1000.0;
+
 void validateConditions(const DetectionConditions& c) {
   if (!std::isfinite(c.temperatureK)) throw InputError("conditions.temperature_K", "not a finite number");
   if (c.temperatureK < 0) throw InputError("conditions.temperature_K", "must not be negative");
+  if (c.temperatureK > kMaxTemperatureK)
+    throw InputError("conditions.temperature_K", "above the limit of 1000 K (the phonon model is for cryogenic to room temperature)");
   if (!std::isfinite(c.extraBroadeningGHz) || c.extraBroadeningGHz < 0)
     throw InputError("conditions.broadening_GHz", "must be a finite, non-negative number");
+  if (c.bathT2StarS && !(std::isfinite(*c.bathT2StarS) && *c.bathT2StarS > 0))
+    throw InputError("conditions.bath_t2star_s", "must be a finite, positive number of seconds");
   if (!c.collectionLab.allFinite() || c.collectionLab.norm() < 1e-12)
     throw InputError("conditions.collection_lab", "must be a non-zero finite vector");
   if (c.analyserLab && (!c.analyserLab->allFinite() || c.analyserLab->norm() < 1e-12))
@@ -63,6 +69,12 @@ CentreModel::CentreModel(ModelSetup setup) : setup_(std::move(setup)) {
   ground_ = manifoldModel(p, Manifold::Ground);
   excited_ = manifoldModel(p, Manifold::Excited);
   zplGHz_ = p.get(Param::ZplTHz) * 1e3;
+  // Optional thermal ZPL shift c (T / 1 K)^p (docs/physics.md, Phonons); inactive when unknown.
+  if (p.known(Param::ZplShiftCoef) && p.known(Param::ZplShiftPower) && setup_.conditions.temperatureK > 0)
+    thermalShiftGHz_ = p.get(Param::ZplShiftCoef) * std::pow(setup_.conditions.temperatureK, p.get(Param::ZplShiftPower));
+  if (!std::isfinite(thermalShiftGHz_) || std::abs(thermalShiftGHz_) > 1e6)
+    throw InputError("zpl_shift_coef_GHz", "thermal ZPL shift at the project temperature exceeds 1e6 GHz: check the coefficient and zpl_shift_power");
+  zplGHz_ += thermalShiftGHz_;
   dipoleRatio_ = p.get(Param::DipoleRatio);
   const auto& c = setup_.conditions;
   if (c.analyserLab) {

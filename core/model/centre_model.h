@@ -34,7 +34,9 @@ struct DetectionConditions {
   PopulationModel populations = PopulationModel::Thermal;
   Vec3 collectionLab = Vec3(0, 0, 1);
   std::optional<Vec3> analyserLab;  ///< none: unpolarised detection along collectionLab
-  double extraBroadeningGHz = 0;    ///< added to the lifetime-limited FWHM
+  double extraBroadeningGHz = 0;    ///< inhomogeneous width added to every line's homogeneous FWHM
+  bool phononSideband = false;      ///< PL spectra include the phonon sideband (Debye–Waller split)
+  std::optional<double> bathT2StarS;  ///< bath-limited spin T2* set by the user (s), beside the phonon limit
 
   bool operator==(const DetectionConditions&) const = default;
 };
@@ -77,8 +79,12 @@ public:
   const ModelSetup& setup() const { return setup_; }
   const ManifoldModel& manifold(Manifold m) const { return m == Manifold::Ground ? ground_ : excited_; }
   double zplGHz() const { return zplGHz_; }
-  /// Lifetime-limited FWHM plus the user broadening (GHz).
+  /// Lifetime-limited FWHM plus the user broadening (GHz): a temperature-free scale for margins.
+  /// Per-line widths at the project's temperature come from core/thermal (lineFwhmGHz).
   double linewidthGHz() const;
+  /// Thermal shift of the ZPL at the conditions' temperature (GHz), included in zplGHz(); 0 when
+  /// the shift coefficient is 0 or unknown.
+  double thermalZplShiftGHz() const { return thermalShiftGHz_; }
   /// Analyser unit vectors (crystal frame) of the detection geometry: one analyser, or two
   /// perpendicular to the collection direction for unpolarised detection.
   const std::array<Vec3, 2>& analysersCrystal() const { return analysers_; }
@@ -102,6 +108,7 @@ private:
   ModelSetup setup_;
   ManifoldModel ground_, excited_;
   double zplGHz_ = 0;
+  double thermalShiftGHz_ = 0;
   double dipoleRatio_ = 1;
   std::array<Vec3, 2> analysers_;
   int analyserCount_ = 2;

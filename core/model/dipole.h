@@ -1,5 +1,6 @@
 #pragma once
-// Electric-dipole transition amplitudes between excited and ground eigenstates (physics.md §4).
+// Electric-dipole transition amplitudes between excited and ground eigenstates (docs/physics.md,
+// Optical transitions).
 // Orbital operators in the defect frame: d_x = r·σ_z, d_y = −r·σ_x, d_z = 1 (r = d⊥/d∥), identity
 // on spin and nucleus. The orbital factor is the slowest index of a basis vector, so σ_z negates
 // the lower half of a vector and σ_x swaps its halves.

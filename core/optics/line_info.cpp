@@ -103,6 +103,7 @@ std::optional<double> sweepCoordinate(const SweepSpec& sweep, const LabFrame& la
       return angle;
     }
     case SweepKind::Strain: return std::nullopt;
+    case SweepKind::Temperature: return std::nullopt;  // a magnet setting has no temperature
   }
   return std::nullopt;
 }

@@ -10,7 +10,7 @@
 namespace finestra {
 
 /// Fraction of a line's dipole strength along its class's symmetry axis, |a·ẑ|²/|a|² (0..1).
-/// At zero field B and C lines give 1, A and D lines 0 (physics.md §4). NaN for a dark line.
+/// At zero field B and C lines give 1, A and D lines 0 (docs/physics.md, Optical transitions). NaN for a dark line.
 double axisParallelFraction(const OpticalLine& line, int cls);
 
 /// "∥ axis 97 %" / "⊥ axis 88 %" (the larger share), "dark" for a line with no dipole strength.
@@ -46,7 +46,7 @@ std::vector<LineCandidate> nearestLinesForPeak(const CentreModel& model, const P
                                                std::size_t count);
 
 /// Position of a magnet setting on a sweep's axis: |B| for a magnitude sweep, the angle (deg) of
-/// the field in the sweep plane for an angle sweep; none for a strain sweep or a zero field in an
+/// the field in the sweep plane for an angle sweep; none for a strain or temperature sweep or a zero field in an
 /// angle sweep.
 std::optional<double> sweepCoordinate(const SweepSpec& sweep, const LabFrame& lab, const FieldSetting& field);
 

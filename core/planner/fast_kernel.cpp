@@ -7,6 +7,7 @@
 #include <numbers>
 
 #include "core/common/errors.h"
+#include "core/thermal/planning_width.h"
 #include "core/units/linewidth.h"
 
 namespace finestra {
@@ -50,7 +51,7 @@ PlannerKernel::PlannerKernel(const CentreModel& model, const PlannerSettings& se
     d.axisCrystal = Vec3(axis[0], axis[1], axis[2]).normalized();
   }
   dipoleRatio_ = model.setup().centre.parameters.get(Param::DipoleRatio);
-  linewidthGHz_ = model.linewidthGHz();
+  linewidthGHz_ = separationLinewidthGHz(model);
   freeElectronDrive_ = 0.5 * ground.spinZeeman;
 }
 

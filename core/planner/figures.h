@@ -1,5 +1,5 @@
 #pragma once
-// Figures of merit of one orientation class at one magnet setting (physics.md §5) and the
+// Figures of merit of one orientation class at one magnet setting (docs/physics.md, Planner figures) and the
 // settings that define them. Plain data shared by the fast map kernel, the reference evaluation,
 // the constraints and the reports.
 #include <array>

@@ -3,6 +3,8 @@
 #include <cmath>
 #include <cstdio>
 
+#include "core/thermal/planning_width.h"
+
 namespace finestra {
 namespace {
 
@@ -116,7 +118,7 @@ json planJson(const CentreModel& model, const PlanRequest& request, const PlanRe
   return {{"target_class", request.targetClass},
           {"lines", lineFamilyText(request.settings.family)},
           {"drive_lab", vec(request.settings.driveLab.normalized())},
-          {"linewidth_GHz", model.linewidthGHz()},
+          {"linewidth_GHz", separationLinewidthGHz(model)},
           {"reach", reachJson},
           {"constraints", constraints},
           {"objective", {{"figure", std::string(figureInfo(request.objective.figure).key)},
@@ -174,7 +176,7 @@ json pointJson(const CentreModel& model, const PlannerSettings& settings, const 
           {"field_lab_T", vec(model.setup().lab.toLab(fieldCrystal))},
           {"lines", lineFamilyText(settings.family)},
           {"drive_lab", vec(settings.driveLab.normalized())},
-          {"linewidth_GHz", model.linewidthGHz()},
+          {"linewidth_GHz", separationLinewidthGHz(model)},
           {"classes", classes}};
 }
 

@@ -6,6 +6,7 @@
 #include <numbers>
 
 #include "core/model/dipole.h"
+#include "core/thermal/planning_width.h"
 
 namespace finestra {
 namespace {
@@ -42,6 +43,7 @@ std::pair<double, double> scanMiddleGap(const CentreModel& model, Manifold m, in
 
 std::array<ClassFigures, kClassCount> referenceFigures(const CentreModel& model, const PlannerSettings& settings,
                                                        const Vec3& direction, double magnitudeT, int gapSteps) {
+  const double linewidthGHz = separationLinewidthGHz(model);
   std::array<ClassFigures, kClassCount> out{};
   std::array<std::vector<double>, kClassCount> chosen, all;
   const Vec3 field = magnitudeT * direction;
@@ -86,7 +88,7 @@ std::array<ClassFigures, kClassCount> referenceFigures(const CentreModel& model,
       if (other != cls)
         for (double c : chosen[static_cast<std::size_t>(cls)])
           for (double a : all[static_cast<std::size_t>(other)]) gap = std::min(gap, std::abs(c - a));
-    out[static_cast<std::size_t>(cls)].separationLinewidths = gap / model.linewidthGHz();
+    out[static_cast<std::size_t>(cls)].separationLinewidths = gap / linewidthGHz;
   }
   return out;
 }

@@ -10,6 +10,7 @@
 #include <vector>
 
 #include "core/model/centre_model.h"
+#include "core/model/zpl_anchor.h"
 #include "core/crystal/magnet_calibration.h"
 #include "core/project/measured_spectrum.h"
 #include "core/units/spectral_units.h"
@@ -22,6 +23,10 @@ struct CentreChoice {
   std::string preset = "SiV-";
   std::optional<std::string> isotope;
   std::map<std::string, double> overrides;  ///< parameter key → value (user-set)
+  /// Parameter key → value the user explicitly assumes (e.g. excited hyperfine = 0): used like an
+  /// override but carried with status "assumed" into every output that reports provenance.
+  std::map<std::string, double> assumed;
+  std::optional<ZplAnchor> zplAnchor;  ///< solve the ZPL centroid from a named line's wavelength
 
   bool operator==(const CentreChoice&) const = default;
 };
@@ -47,12 +52,13 @@ struct FieldSetting {
   bool operator==(const FieldSetting&) const = default;
 };
 
-enum class SweepKind { Magnitude, Angle, Strain };
+enum class SweepKind { Magnitude, Angle, Strain, Temperature };
 
 /// A path through field or strain space. Magnitude: the project's field direction, |B| from..to (T).
 /// Angle: |B| of the project's field, direction rotated in the lab plane ⟂ planeNormalLab starting
 /// at startLab (projected into the plane), angle from..to (deg). Strain: crystal strain
-/// project + t·(strainTo − project) for t from..to.
+/// project + t·(strainTo − project) for t from..to. Temperature: the project's field and strain,
+/// temperature from..to (K); levels stay, rates and linewidths change.
 struct SweepSpec {
   std::string name;
   SweepKind kind = SweepKind::Magnitude;

@@ -24,6 +24,7 @@ Vec3 magnetSweepFieldLab(const Project& p, const SweepSpec& s, const LabFrame& l
       return nominal.norm() * (std::cos(a) * u + std::sin(a) * v);
     }
     case SweepKind::Strain: return nominal;
+    case SweepKind::Temperature: return nominal;
   }
   return Vec3::Zero();
 }

@@ -93,12 +93,13 @@ std::string sweepAxisLabel(SweepKind kind) {
     case SweepKind::Magnitude: return "field (T)";
     case SweepKind::Angle: return "angle (deg)";
     case SweepKind::Strain: return "strain path fraction";
+    case SweepKind::Temperature: return "temperature (K)";
   }
   return {};
 }
 
 ordered sweepJson(const SweepSpec& spec, const SweepResult& r) {
-  static const char* kinds[] = {"magnitude", "angle", "strain"};
+  static const char* kinds[] = {"magnitude", "angle", "strain", "temperature"};
   ordered out{{"name", spec.name}, {"kind", kinds[static_cast<int>(spec.kind)]}, {"x", r.x}, {"classes", ordered::array()}};
   for (const ClassSweep& c : r.classes) {
     ordered g = ordered::array(), u = ordered::array(), lines = ordered::array();
@@ -106,9 +107,14 @@ ordered sweepJson(const SweepSpec& spec, const SweepResult& r) {
       g.push_back(toArray(c.groundLevels.row(k).transpose()));
       u.push_back(toArray(c.excitedLevels.row(k).transpose()));
       ordered pts = ordered::array();
-      for (const OpticalLine& l : c.lines[static_cast<std::size_t>(k)])
-        pts.push_back(ordered{{"upper", l.upper}, {"lower", l.lower}, {"label", l.label()},
-                              {"frequency_GHz", l.frequencyGHz}, {"intensity", l.intensity}});
+      const auto& rowLines = c.lines[static_cast<std::size_t>(k)];
+      for (std::size_t i = 0; i < rowLines.size(); ++i) {
+        const OpticalLine& l = rowLines[i];
+        ordered line{{"upper", l.upper}, {"lower", l.lower}, {"label", l.label()},
+                     {"frequency_GHz", l.frequencyGHz}, {"intensity", l.intensity}};
+        if (!c.lineFwhmGHz.empty()) line["fwhm_GHz"] = c.lineFwhmGHz[static_cast<std::size_t>(k)][i];
+        pts.push_back(line);
+      }
       lines.push_back(pts);
     }
     out["classes"].push_back(ordered{{"class", c.cls}, {"ground_GHz", g}, {"excited_GHz", u}, {"lines", lines}});
@@ -117,12 +123,17 @@ ordered sweepJson(const SweepSpec& spec, const SweepResult& r) {
 }
 
 Table sweepLinesTable(const SweepSpec& spec, const SweepResult& r) {
+  const bool widths = spec.kind == SweepKind::Temperature;
   Table t{{sweepAxisLabel(spec.kind), "class", "upper", "lower", "label", "frequency_GHz", "intensity"}, {}};
+  if (widths) t.headers.push_back("fwhm_GHz");
   for (const ClassSweep& c : r.classes)
     for (std::size_t k = 0; k < r.x.size(); ++k)
-      for (const OpticalLine& l : c.lines[k])
+      for (std::size_t i = 0; i < c.lines[k].size(); ++i) {
+        const OpticalLine& l = c.lines[k][i];
         t.rows.push_back({exact(r.x[k]), std::to_string(c.cls), std::to_string(l.upper), std::to_string(l.lower),
                           l.label(), exact(l.frequencyGHz), exact(l.intensity)});
+        if (widths) t.rows.back().push_back(exact(c.lineFwhmGHz[k][i]));
+      }
   return t;
 }
 
@@ -143,7 +154,8 @@ ordered presetsJson(const std::vector<Preset>& presets) {
         if (table[static_cast<std::size_t>(info.id)]) iso[std::string(info.key)] = entry(*table[static_cast<std::size_t>(info.id)]);
       isotopes[name] = iso;
     }
-    out.push_back(ordered{{"name", p.name}, {"title", p.title}, {"parameters", params}, {"isotopes", isotopes}});
+    out.push_back(ordered{{"name", p.name}, {"title", p.title}, {"zpl_reference", p.zplReference}, {"notes", p.notes},
+                          {"parameters", params}, {"isotopes", isotopes}});
   }
   return out;
 }
@@ -155,6 +167,8 @@ Table presetsTable(const std::vector<Preset>& presets) {
                       valueStatusText(v.status), v.source});
   };
   for (const Preset& p : presets) {
+    t.rows.push_back({p.name, "-", "zpl_reference", "-", "", "note", p.zplReference});
+    if (!p.notes.empty()) t.rows.push_back({p.name, "-", "notes", "-", "", "note", p.notes});
     for (const ParamInfo& info : paramTable())
       if (!info.hyperfine) add(p.name, "-", info, p.values[static_cast<std::size_t>(info.id)]);
     for (const auto& [name, table] : p.isotopes)

@@ -1,6 +1,6 @@
 #pragma once
 // Machine (JSON) and human (table/CSV) forms of the engine's results. The JSON of lines has the
-// exact layout documented in architecture.md: outside tooling reads it.
+// exact layout of docs/architecture.md, Machine-readable output: outside tooling reads it.
 #include <nlohmann/json.hpp>
 #include <vector>
 

@@ -1,5 +1,6 @@
 #pragma once
-// Closed-form strain estimate from the four zero-field lines A, B, C, D (physics.md §6).
+// Closed-form strain estimate from the four zero-field lines A, B, C, D (docs/physics.md, Strain from the
+// zero-field lines).
 //
 // With E_m = a1g_m ± Δ_m/2 in each manifold, the lines are
 //   A = c + Δu/2 + Δg/2,  B = c + Δu/2 − Δg/2,  C = c − Δu/2 + Δg/2,  D = c − Δu/2 − Δg/2,

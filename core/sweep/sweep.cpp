@@ -5,6 +5,7 @@
 #include "core/common/parallel.h"
 #include "core/model/tracking.h"
 #include "core/project/sweep_path.h"
+#include "core/thermal/level_widths.h"
 
 namespace finestra {
 namespace {
@@ -59,6 +60,10 @@ ClassSweep sweepClass(const CentreModel& model, const Project& project, const Sw
     for (Eigen::Index i = 0; i < u.eigen.energies.size(); ++i) out.excitedLevels(row, u.id[i]) = u.eigen.energies[i];
     std::vector<OpticalLine> lines = model.lines(cls, g.eigen, u.eigen);
     labelLines(lines, g.branch, u.branch);
+    if (sweep.kind == SweepKind::Temperature)
+      out.lineFwhmGHz.push_back(classThermal(model.setup().centre.parameters, cls, g.eigen, g.branch, u.eigen,
+                                             u.branch, lines, xs[k])
+                                    .lineFwhmGHz);
     for (auto& l : lines) {
       l.upper = u.id[static_cast<std::size_t>(l.upper)];
       l.lower = g.id[static_cast<std::size_t>(l.lower)];

@@ -16,6 +16,8 @@ struct ClassSweep {
   Eigen::MatrixXd groundLevels;   ///< points × levels (GHz)
   Eigen::MatrixXd excitedLevels;  ///< points × levels (GHz)
   std::vector<std::vector<OpticalLine>> lines;  ///< per point
+  /// Temperature sweeps only: homogeneous FWHM (GHz) of each line at each point, parallel to `lines`.
+  std::vector<std::vector<double>> lineFwhmGHz;
 };
 
 struct SweepResult {

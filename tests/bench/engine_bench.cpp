@@ -1,4 +1,4 @@
-// The workload of ../shared/bench/numpy_baseline.py: N field directions (|B| = 0.5 T, the same
+// The workload of tests/bench/numpy_baseline.py: N field directions (|B| = 0.5 T, the same
 // spiral over the sphere) × 4 classes, both 4-state manifolds diagonalised, 16 lines with three
 // crystal-axis analyser intensities. Throughput is reported as class-points per second;
 // tests/bench/engine_vs_numpy.sh runs this and the NumPy baseline in one go and prints the ratio.

@@ -3,11 +3,11 @@
 # class-points per second (one field direction × one orientation class: both 4×4 manifolds
 # diagonalised, 16 lines, three crystal-axis analyser intensities).
 # Usage: tests/bench/engine_vs_numpy.sh BUILD_DIR [directions, default 20000]
-# The baseline is /work/shared/bench/numpy_baseline.py (override with FINESTRA_NUMPY_BASELINE).
+# The baseline is tests/bench/numpy_baseline.py beside this script (override with FINESTRA_NUMPY_BASELINE).
 set -eu
 build=${1:?usage: engine_vs_numpy.sh BUILD_DIR [directions]}
 n=${2:-20000}
-baseline=${FINESTRA_NUMPY_BASELINE:-/work/shared/bench/numpy_baseline.py}
+baseline=${FINESTRA_NUMPY_BASELINE:-$(dirname "$0")/numpy_baseline.py}
 bench_json=$(mktemp)
 trap 'rm -f "$bench_json"' EXIT
 "$build/tests/bench/finestra_engine_bench" --benchmark_filter="BM_LineGrid/$n/" \

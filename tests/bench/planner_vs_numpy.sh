@@ -1,13 +1,13 @@
 #!/bin/sh
 # Runs the planner benchmark and the NumPy baseline in one go and prints their ratio.
 # Usage: tests/bench/planner_vs_numpy.sh BUILD_DIR
-# The baseline (/work/shared/bench/numpy_baseline.py, override with FINESTRA_NUMPY_BASELINE)
+# The baseline (tests/bench/numpy_baseline.py beside this script, override with FINESTRA_NUMPY_BASELINE)
 # diagonalises both manifolds and computes all 16 lines with crystal-axis intensities for N field
 # directions × 4 classes; the planner map computes every planner figure, including two anticrossing
 # scans per class, for the same N = 181 × 361 directions. Ratio = NumPy time / planner time.
 set -eu
 build=${1:?usage: planner_vs_numpy.sh BUILD_DIR}
-baseline=${FINESTRA_NUMPY_BASELINE:-/work/shared/bench/numpy_baseline.py}
+baseline=${FINESTRA_NUMPY_BASELINE:-$(dirname "$0")/numpy_baseline.py}
 n=65341
 bench_json=$(mktemp)
 trap 'rm -f "$bench_json"' EXIT

@@ -95,7 +95,9 @@ TEST(BadInputCli, EveryCatalogueEntryFailsCleanlyWithItsMessage) {
     EXPECT_NE(r.exitCode, 3) << "an internal (non-input) error escaped: " << r.err;
     for (const auto& part : entry.at("expect"))
       EXPECT_NE(r.err.find(part.get<std::string>()), std::string::npos) << "missing '" << part << "' on stderr: " << r.err;
-    if (!file.empty()) EXPECT_NE(r.err.find(file), std::string::npos) << "stderr must name the file: " << r.err;
+    if (!file.empty()) {
+      EXPECT_NE(r.err.find(file), std::string::npos) << "stderr must name the file: " << r.err;
+    }
     ++checked;
   }
   EXPECT_GE(checked, 30);
@@ -112,6 +114,8 @@ TEST(BadInputCli, EveryOutputFormatOfAGoodProjectIsFinite) {
       for (auto& c : lower) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
       EXPECT_EQ(lower.find("nan"), std::string::npos);
       EXPECT_EQ(lower.find("inf"), std::string::npos);
-      if (std::string(format) == "json") EXPECT_EQ(r.out.find("null"), std::string::npos) << "a NaN is printed as null";
+      if (std::string(format) == "json") {
+        EXPECT_EQ(r.out.find("null"), std::string::npos) << "a NaN is printed as null";
+      }
     }
 }

@@ -21,7 +21,8 @@ std::map<char, double> parentFrequencies(const ClassSolution& s) {
 }  // namespace
 
 TEST(FineStructure, FourLineIdentitiesAndOrder) {
-  // physics.md §1 (exact algebra of the model): A−B = C−D = Δg and A−C = B−D = Δu; A highest, D lowest.
+  // docs/physics.md, Line labels A–D (exact algebra of the model):
+  // A−B = C−D = Δg and A−C = B−D = Δu; A highest, D lowest.
   std::mt19937 rng(11);
   for (const char* preset : {"SiV-", "GeV-", "SnV-"}) {
     for (int trial = 0; trial < 5; ++trial) {
@@ -81,7 +82,7 @@ TEST(FineStructure, ZplIsTheCentroidOfTheFourLines) {
 }
 
 TEST(FineStructure, InnerLinesAxialOuterLinesTransverse) {
-  // Trade fact (common practice) and physics.md §4: at zero field and strain B and C are polarised
+  // Trade fact (common practice) and docs/physics.md, Optical transitions: at zero field and strain B and C are polarised
   // along the symmetry axis, A and D perpendicular to it; inner lines parallel to each other.
   const CentreModel model(setupFor("SiV-"));
   const Vec3 axis = defectFrame(0).row(2).transpose();

@@ -75,7 +75,8 @@ TEST(FitDesign, DuplicateColumnIsUndetermined) {
 }
 
 // One orientation class only: its lines fix |ε_Eg| per manifold and one A1g combination, which a
-// ZPL offset imitates exactly (physics.md §6). Six tensor components plus the offset cannot all
+// ZPL offset imitates exactly (docs/physics.md, What line positions tell about
+// strain). Six tensor components plus the offset cannot all
 // be determined, and the E-strain angle never shows in line positions.
 TEST(FitDesign, DegenerateDesignNamesUndeterminedParameters) {
   Project base = scenarioProject("SiV-");

@@ -113,7 +113,7 @@ TEST(ClosedFormEigen4, StaysExactWhereOrbitalZeemanCancelsSpinOrbit) {
   }
 }
 
-// Time-reversal symmetry makes every level a Kramers pair at zero field (physics.md §3): the
+// Time-reversal symmetry makes every level a Kramers pair at zero field (docs/physics.md, The centres): the
 // closed form declines and the caller must use the self-adjoint solver.
 TEST(ClosedFormEigen4, DeclinesKramersDegenerateLevels) {
   const CentreModel model = strainedModel("SnV-", false);

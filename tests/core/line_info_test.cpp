@@ -18,7 +18,7 @@ Project siliconProject(double fieldT) {
 }
 
 TEST(LineInfo, ZeroFieldPolarisationOfTheFourLines) {
-  // physics.md §4 consequence of the dipole operator: at zero field and strain the inner lines
+  // docs/physics.md, Optical transitions: consequence of the dipole operator: at zero field and strain the inner lines
   // B and C are polarised along the defect axis, the outer lines A and D perpendicular to it.
   const Project p = siliconProject(0.0);
   const CentreModel model(makeModelSetup(p));

@@ -1,4 +1,4 @@
-// The magnet calibration (field scale and tilt, architecture.md "Magnet tilt") is part of the
+// The magnet calibration (field scale and tilt, docs/physics.md, Magnet calibration) is part of the
 // project: every computation from a magnet setting applies it, and a fit applied to the project
 // keeps it, so the applied project reproduces the fit.
 #include <gtest/gtest.h>
@@ -29,7 +29,7 @@ Project demoProject() {
 }  // namespace
 
 // Geometry of the definition: the tilt rotates about n̂ = (−sin φt, cos φt, 0), so the nominal lab
-// z axis tips by the tilt angle toward azimuth φt (exact, architecture.md).
+// z axis tips by the tilt angle toward azimuth φt (exact; docs/physics.md, Magnet calibration).
 TEST(MagnetCalibration, TipsLabZTowardTheTiltAzimuthAndScales) {
   const MagnetCalibration m{1.2, 7.0, 30.0};
   const Vec3 z = m.trueFieldLab(Vec3(0, 0, 1));

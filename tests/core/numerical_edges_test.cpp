@@ -211,7 +211,7 @@ TEST(NumericalEdges, FieldsUpToThirtyTeslaInAnyDirectionStayFinite) {
 
 TEST(NumericalEdges, LargeStrainMatchesTheClosedFormSplitting) {
   // At zero field the manifold eigenvalues are a1g ± √((λ/2)² + cz² + cx²) with cz = Υx − ε_Egx,
-  // cx = Υy + ε_Egy (physics.md §3; Meesala et al., PRB 97, 205444 (2018)): check up to 1e-2.
+  // cx = Υy + ε_Egy (docs/physics.md, Strain; Meesala et al., PRB 97, 205444 (2018)): check up to 1e-2.
   for (const char* preset : kPresets) {
     for (double e : {1e-6, 1e-4, 1e-2}) {
       SCOPED_TRACE(std::string(preset) + " strain " + std::to_string(e));

@@ -44,7 +44,7 @@ void expectSameFigures(const ClassFigures& a, const ClassFigures& b, const std::
 
 // Without strain, B ∥ axis conserves S_z in both manifolds (every term commutes with S_z) and the
 // dipole operator does not act on spin, so spin-flipping decay vanishes: cyclicity is largest on
-// the axis (Hepp et al., PRL 112, 036405 (2014), model as in physics.md §3–4).
+// the axis (Hepp et al., PRL 112, 036405 (2014), model as in docs/physics.md, Zeeman).
 TEST(PlannerPhysics, FieldAlongClassAxisMaximisesItsCyclicity) {
   const CentreModel model(makeModelSetup(cubicLabProject()));
   PlannerSettings settings;
@@ -103,8 +103,8 @@ TEST(PlannerPhysics, AlongOneOneOneClassZeroStandsApart) {
   EXPECT_LT(f[1].cyclicity, 1e6);
 }
 
-// Unstrained, B ∥ axis: the lower-branch states are |L_z=+1,↑⟩ and |L_z=−1,↓⟩ (λ > 0, physics.md
-// §3), so the qubit splitting is (γ_S + 2 q γ_L)|B| exactly, with γ_L = μ_B/h and γ_S = g_s μ_B/h
+// Unstrained, B ∥ axis: the lower-branch states are |L_z=+1,↑⟩ and |L_z=−1,↓⟩ (λ > 0, docs/physics.md,
+// Spin–orbit), so the qubit splitting is (γ_S + 2 q γ_L)|B| exactly, with γ_L = μ_B/h and γ_S = g_s μ_B/h
 // (CODATA 2018).
 TEST(PlannerPhysics, QubitFrequencyAlongTheAxisIsTheLinearZeeman) {
   const CentreModel model(makeModelSetup(cubicLabProject()));
@@ -118,7 +118,7 @@ TEST(PlannerPhysics, QubitFrequencyAlongTheAxisIsTheLinearZeeman) {
 // on the spin only, so without strain and with B ∥ axis it cannot flip the qubit; strain mixes the
 // orbitals and opens it (Pieplow et al., arXiv 2312.02637). In this model only B_z couples to the
 // orbit, so without strain L_z stays conserved for every DC field direction and the drive stays
-// zero; with strain, a transverse DC field also opens a drive along the axis (physics.md §5).
+// zero; with strain, a transverse DC field also opens a drive along the axis (docs/physics.md, Planner figures).
 TEST(PlannerPhysics, PerpendicularDriveCannotFlipTheLockedQubit) {
   const Vec3 axis = Vec3(1, 1, 1).normalized(), perp = Vec3(1, -1, 0).normalized();
   const Vec3 tilted = 0.5 * (std::cos(20 * kDeg) * axis + std::sin(20 * kDeg) * Vec3(1, 1, -2).normalized());

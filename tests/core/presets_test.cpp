@@ -40,7 +40,7 @@ TEST(Presets, UnknownPresetNamesTheAlternatives) {
 }
 
 TEST(Presets, PbVExcitedSplittingIsUnknownAndBlocksComputation) {
-  // physics.md §7: λ_u of PbV⁻ has no value at hand; the user must set it.
+  // docs/physics.md, Provenance of values: λ_u of PbV⁻ has no value at hand; the user must set it.
   const ResolvedCentre c = resolveCentre("PbV-", std::nullopt, {});
   try {
     c.parameters.validateForComputation();

@@ -1,4 +1,5 @@
-// The engine against a second, deliberately plain transcription of physics.md §3–§4 written here
+// The engine against a second, deliberately plain transcription of docs/physics.md
+// (Hamiltonian of one manifold, Optical transitions) written here
 // with explicit Kronecker products (no shared code with core/hamiltonian or core/optics beyond the
 // class frames, which symmetry_test pins separately).
 #include <gtest/gtest.h>

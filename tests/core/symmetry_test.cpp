@@ -1,4 +1,5 @@
-// Symmetry invariances that pin the frame conventions (physics.md §2, §8).
+// Symmetry invariances that pin the frame conventions (docs/physics.md, Frames;
+// docs/physics.md, Check values used by the tests).
 // A proper rotation R applied together to the field, the strain tensor and the analyser leaves
 // every observable of the ensemble of four classes unchanged when R is a cubic symmetry; one class
 // alone is unchanged under its own C3 and its C2 about y, and changed by C2 about x.
@@ -88,13 +89,14 @@ TEST(Symmetry, ClassFramesAreRightHandedAndOnTheirAxes) {
     const auto axis = classAxisIndices(cls);
     EXPECT_NEAR(f.row(2).dot(Vec3(axis[0], axis[1], axis[2]).normalized()), 1.0, 1e-14);
   }
-  // Class 0 (physics.md §2): x = [11-2]/√6, y = [-110]/√2.
+  // Class 0 (docs/physics.md, Frames): x = [11-2]/√6, y = [-110]/√2.
   EXPECT_NEAR(defectFrame(0).row(0).dot(Vec3(1, 1, -2).normalized()), 1.0, 1e-14);
   EXPECT_NEAR(defectFrame(0).row(1).dot(Vec3(-1, 1, 0).normalized()), 1.0, 1e-14);
 }
 
 TEST(Symmetry, StrainAngleDoesNotMoveLevels) {
-  // physics.md §6: an orbital rotation about the axis commutes with spin–orbit, Zeeman and hyperfine,
+  // docs/physics.md, What line positions tell about strain:
+  // an orbital rotation about the axis commutes with spin–orbit, Zeeman and hyperfine,
   // so at fixed |ε_Eg| the levels do not depend on the E-strain angle.
   std::mt19937 rng(8);
   ModelSetup setup = finestra::testing::setupFor("SiV-");

@@ -40,7 +40,7 @@ TEST(SpectralUnits, PhotonEnergyAndWavenumber) {
 }
 
 TEST(Linewidth, LifetimeLimit) {
-  // 1/(2π · 1.7 ns) = 93.6 MHz (physics.md §8: τ = 1.7 ns → 94 MHz).
+  // 1/(2π · 1.7 ns) = 93.6 MHz (exact arithmetic; docs/physics.md, Spectra).
   EXPECT_NEAR(lifetimeLimitedFwhmGHz(1.7) * 1e3, 93.6, 0.1);
 }
 

@@ -22,11 +22,11 @@ SpectrumView::SpectrumView(const ViewContext& context, QWidget* parent)
 }
 
 SpectrumPlotData SpectrumView::plotData() const {
-  SpectrumPlotData data = result_->spectrumPlot;
+  SpectrumPlotData spectrum = result_->spectrumPlot;
   const ProjectDocument* document = context().document;
   if (document && document->measuredSpectrum() && result_->model)
-    addMeasuredSpectrum(data, *document->measuredSpectrum(), result_->model->zplGHz());
-  return data;
+    addMeasuredSpectrum(spectrum, *document->measuredSpectrum(), result_->model->zplGHz());
+  return spectrum;
 }
 
 void SpectrumView::rebuild() {
@@ -36,10 +36,10 @@ void SpectrumView::rebuild() {
     plot_->replot();
     return;
   }
-  const SpectrumPlotData data = plotData();
-  plot_->xAxis->setLabel(QString::fromStdString(spectralUnitLabel(data.unit)));
+  const SpectrumPlotData spectrum = plotData();
+  plot_->xAxis->setLabel(QString::fromStdString(spectralUnitLabel(spectrum.unit)));
   std::array<QCPGraph*, 4> sticks{};
-  for (const Stick& s : data.sticks) {
+  for (const Stick& s : spectrum.sticks) {
     if (!filter_->visible(s.cls)) continue;
     QCPGraph*& g = sticks[static_cast<std::size_t>(s.cls)];
     if (!g) {
@@ -52,20 +52,20 @@ void SpectrumView::rebuild() {
   }
   QCPGraph* curve = plot_->addGraph();
   curve->setPen(QPen(QColor(40, 40, 40), 1.4));
-  curve->setData(data.x, data.y, true);
+  curve->setData(spectrum.x, spectrum.y, true);
   curve->setName(result_->project.conditions.populations == PopulationModel::Thermal
                      ? tr("simulated (%1 K)").arg(result_->project.conditions.temperatureK)
                      : tr("simulated (equal populations)"));
-  if (!data.measuredX.isEmpty()) {
+  if (!spectrum.measuredX.isEmpty()) {
     QCPGraph* measured = plot_->addGraph();
     QPen pen(palette().measured, 1.2);
     pen.setStyle(Qt::DashLine);
     measured->setPen(pen);
-    measured->setData(data.measuredX, data.measuredY);
-    measured->setName(tr("measured: %1 (scaled)").arg(data.measuredName));
+    measured->setData(spectrum.measuredX, spectrum.measuredY);
+    measured->setName(tr("measured: %1 (scaled)").arg(spectrum.measuredName));
   }
   QVector<Stick> labelled;
-  for (const Stick& s : data.sticks)
+  for (const Stick& s : spectrum.sticks)
     if (filter_->visible(s.cls)) labelled.push_back(s);
   std::sort(labelled.begin(), labelled.end(), [](const Stick& a, const Stick& b) { return a.height > b.height; });
   if (labelled.size() > kLabelledSticks) labelled.resize(kLabelledSticks);
@@ -81,7 +81,7 @@ void SpectrumView::rebuild() {
     text->setClipToAxisRect(true);
   }
   plot_->rescaleAxes();
-  plot_->yAxis->setRange(0, std::max(data.curveMax, 1e-30) * 1.18);
+  plot_->yAxis->setRange(0, std::max(spectrum.curveMax, 1e-30) * 1.18);
   plot_->replot();
 }
 
@@ -110,9 +110,9 @@ void SpectrumView::onMouseMove(QMouseEvent* event) {
 Table SpectrumView::dataTable() const {
   Table t;
   if (!result_ || !result_->error.isEmpty()) return t;
-  const SpectrumPlotData data = plotData();
-  t.headers = {spectralUnitLabel(data.unit), "simulated"};
-  for (qsizetype i = 0; i < data.x.size(); ++i) t.rows.push_back({exact(data.x[i]), exact(data.y[i])});
+  const SpectrumPlotData spectrum = plotData();
+  t.headers = {spectralUnitLabel(spectrum.unit), "simulated"};
+  for (qsizetype i = 0; i < spectrum.x.size(); ++i) t.rows.push_back({exact(spectrum.x[i]), exact(spectrum.y[i])});
   return t;
 }
 
