@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
 #include <memory>
 #include <numeric>
 
@@ -139,18 +140,23 @@ double peakHeight(const PeakSumModel& m, const Eigen::VectorXd& x, int k) {
   return x[PeakSumModel::peakOffset(m.shape(), k) + 1] * m.profile(x, k, x[PeakSumModel::peakOffset(m.shape(), k)]);
 }
 
-// Index of a peak that does not belong in the result, or -1: outside the data, wider than the
-// whole window, below the stated signal-to-noise, or an area not different from zero at 3σ.
-int weakestUnwantedPeak(const PeakSumModel& m, const Eigen::VectorXd& x, const SampledSpectrum& d, double noise, double minSnr) {
+struct UnwantedPeak {
+  int index = -1;      ///< -1: every peak belongs in the result
+  std::string reason;  ///< why it was dropped, in words, with its position
+};
+
+// The peak that does not belong in the result: outside the data, wider than the whole window,
+// below the stated signal-to-noise, or an area not different from zero at 3σ.
+UnwantedPeak weakestUnwantedPeak(const PeakSumModel& m, const Eigen::VectorXd& x, const SampledSpectrum& d, double noise, double minSnr) {
   const int n = m.peakCount();
-  if (n == 0) return -1;
+  if (n == 0) return {};
   Eigen::MatrixXd jac;
   m.jacobian(x, jac);
   Eigen::VectorXd r;
   m.residuals(x, r);
   const UncertaintyAnalysis u = analyseUncertainty(jac, r.squaredNorm());
   const double span = d.position.back() - d.position.front();
-  int worst = -1;
+  UnwantedPeak worst;
   double worstScore = 0;
   for (int k = 0; k < n; ++k) {
     const int o = PeakSumModel::peakOffset(m.shape(), k);
@@ -160,9 +166,16 @@ int weakestUnwantedPeak(const PeakSumModel& m, const Eigen::VectorXd& x, const S
     const bool outside = x[o] < d.position.front() || x[o] > d.position.back();
     const bool unwanted = outside || fwhm > span || height < minSnr * noise || !(areaSignificance >= 3.0);
     const double score = outside ? 1e300 : height / noise;
-    if (unwanted && (worst < 0 || score < worstScore || outside)) {
-      worst = k;
+    if (unwanted && (worst.index < 0 || score < worstScore || outside)) {
+      worst.index = k;
       worstScore = score;
+      char near[48];
+      std::snprintf(near, sizeof near, "candidate near %.6g dropped: ", x[o]);
+      worst.reason = near + std::string(outside                    ? "its fitted centre left the data range"
+                                        : fwhm > span               ? "wider than the whole spectrum"
+                                        : height < minSnr * noise   ? "its fitted height is below the --min-snr threshold"
+                                                                    : "its area does not differ from zero at 3 sigma "
+                                                                      "(e.g. a one-sample spike, narrower than the sample step)");
     }
   }
   return worst;
@@ -234,9 +247,10 @@ PeakFinderResult findPeaks(const std::vector<double>& position, const std::vecto
   for (;;) {
     const int peaks = static_cast<int>((fit.x.size() - 2) / per);
     const PeakSumModel m(data, noise, o.shape, peaks, origin0);
-    const int drop = weakestUnwantedPeak(m, fit.x, *data, noise, o.minSnr);
-    if (drop < 0) break;
-    fit = fitPeaks(data, noise, o.shape, removePeak(fit.x, o.shape, drop), origin0);
+    const UnwantedPeak drop = weakestUnwantedPeak(m, fit.x, *data, noise, o.minSnr);
+    if (drop.index < 0) break;
+    result.dropped.push_back(drop.reason);
+    fit = fitPeaks(data, noise, o.shape, removePeak(fit.x, o.shape, drop.index), origin0);
   }
 
   const int peaks = static_cast<int>((fit.x.size() - 2) / per);

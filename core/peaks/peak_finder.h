@@ -41,6 +41,7 @@ struct PeakFinderResult {
   bool errorsScaled = false;
   bool converged = false;
   std::string status;
+  std::vector<std::string> dropped;  ///< candidates fitted and then dropped, each with its position and reason
 };
 
 /// Samples in any order (sorted here); InputError naming `origin` for mismatched lengths, fewer

@@ -59,6 +59,9 @@ std::string peaksSummary(const PeakFinderResult& r, SpectralUnit unit) {
   text += "noise sigma per sample = " + sig(r.noise) + (r.noiseFloored ? " (the data show no noise; floor used)" : "") + "\n";
   text += "baseline = " + sig(r.baseline.offset) + " + " + sig(r.baseline.slope) + " * (x - " + sig(r.baseline.origin) + ")\n";
   text += r.status + "; " + errorScalingNote(r.errorsScaled, r.chi2PerDof) + "\n";
+  constexpr std::size_t kDroppedShown = 5;  // the rest are counted, not listed
+  for (std::size_t k = 0; k < r.dropped.size() && k < kDroppedShown; ++k) text += r.dropped[k] + "\n";
+  if (r.dropped.size() > kDroppedShown) text += "... and " + std::to_string(r.dropped.size() - kDroppedShown) + " more candidates dropped\n";
   return text;
 }
 

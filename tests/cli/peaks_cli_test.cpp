@@ -63,6 +63,21 @@ TEST(PeaksCli, BadInputNamesTheOptionOrFile) {
   EXPECT_NE(run.err.find("peaks_bad.csv:3"), std::string::npos) << run.err;
 }
 
+// A one-sample spike on a flat noiseless signal: no peak, and the table says why the candidates
+// were dropped, listing at most five of them.
+TEST(PeaksCli, TableSaysWhyCandidatesWereDropped) {
+  std::string text = "GHz_detuning,signal\n";
+  for (int i = 0; i < 50; ++i) text += std::to_string(i) + "," + (i == 25 ? "5" : "0") + "\n";
+  const auto run = runCli("peaks " + writeTemp("peaks_spike.csv", text));
+  ASSERT_EQ(run.exitCode, 0) << run.err;
+  EXPECT_NE(run.out.find("0 peaks"), std::string::npos) << run.out;
+  EXPECT_NE(run.out.find("candidate near 25"), std::string::npos) << run.out;
+  std::size_t listed = 0;
+  for (std::size_t at = run.out.find("dropped: "); at != std::string::npos; at = run.out.find("dropped: ", at + 1)) ++listed;
+  EXPECT_GE(listed, 1u);
+  EXPECT_LE(listed, 5u) << run.out;
+}
+
 TEST(StrainMapCli, CsvHasValueAndSigmaColumnsAndOneRowPerEmitter) {
   const auto run = runCli("strain --centre SiV- --peaks " + kEmitters + " --format csv");
   ASSERT_EQ(run.exitCode, 0) << run.err;

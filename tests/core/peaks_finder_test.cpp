@@ -168,3 +168,18 @@ TEST(PeaksFinder, OptionsOutOfRangeNameTheKeyAndLimit) {
   y[3] = std::nan("");
   EXPECT_THROW(findPeaks(x, y, {}, "f.csv"), InputError);
 }
+
+TEST(PeaksFinder, ADroppedCandidateIsReportedWithItsPositionAndReason) {
+  // A one-sample spike (e.g. a cosmic-ray hit) on a flat, noiseless signal is no resolved line:
+  // it must not come out as a peak, and the result must say why the candidate was dropped.
+  std::vector<double> x, y;
+  for (int i = 0; i < 50; ++i) {
+    x.push_back(i);
+    y.push_back(i == 25 ? 5.0 : 0.0);
+  }
+  const PeakFinderResult r = findPeaks(x, y, PeakFinderOptions{}, "spike");
+  EXPECT_TRUE(r.peaks.empty());
+  ASSERT_FALSE(r.dropped.empty());
+  EXPECT_NE(r.dropped.front().find("candidate near 25"), std::string::npos) << r.dropped.front();
+  EXPECT_NE(r.dropped.front().find("dropped: "), std::string::npos) << r.dropped.front();
+}
