@@ -5,7 +5,7 @@
 set -euo pipefail
 packages=(
   cmake ninja-build g++ pkg-config
-  libeigen3-dev nlohmann-json3-dev libcli11-dev libspdlog-dev
+  libeigen3-dev nlohmann-json3-dev libcli11-dev libspdlog-dev libcerf-dev
   qt6-base-dev qt6-svg-dev libqcustomplot-dev libgl-dev
   libgtest-dev libgmock-dev libbenchmark-dev
   clang-14 libclang-rt-14-dev

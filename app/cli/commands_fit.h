@@ -3,6 +3,7 @@
 // `strain` (closed-form estimate from the four zero-field lines).
 #include <optional>
 #include <string>
+#include <vector>
 
 #include <CLI/CLI.hpp>
 
@@ -19,6 +20,11 @@ struct FitCommandOptions {
 
 struct StrainCommandOptions {
   std::string measurement;     ///< name of the zero-field set (default: first set at zero field)
+  std::string centre;          ///< preset key when no project is given
+  std::string peaks;           ///< CSV of zero-field lines, one row per emitter (a sample map)
+  std::vector<double> lines;   ///< four typed lines A, B, C, D
+  double sigma = 0;            ///< their common uncertainty (unit of --unit)
+  std::string unit = "GHz";    ///< unit of --lines and --sigma
 };
 
 void addFitOptions(CLI::App* command, FitCommandOptions& options);

@@ -6,7 +6,9 @@
 
 #include "app/cli/commands.h"
 #include "app/cli/commands_fit.h"
+#include "app/cli/commands_peaks.h"
 #include "app/cli/commands_plan.h"
+#include "app/cli/commands_spectrum_fit.h"
 #include "app/cli/commands_thermal.h"
 #include "app/cli/commands_resonance.h"
 #include "core/centre/parameter_table.h"
@@ -64,8 +66,9 @@ int main(int argc, char** argv) {
   addProjectOptions(fitCmd, common);
   addFitOptions(fitCmd, fitOptions);
   StrainCommandOptions strainOptions;
-  auto* strainCmd = app.add_subcommand("strain", "closed-form strain estimate from the four zero-field lines of a measurement set");
+  auto* strainCmd = app.add_subcommand("strain", "closed-form strain from four zero-field lines: a project's zero-field set, typed lines or a CSV of many emitters");
   addProjectOptions(strainCmd, common);
+  strainCmd->get_option("project")->required(false);
   addStrainOptions(strainCmd, strainOptions);
   MicrowaveOptions microwaveOptions;
   auto* microwaveCmd = app.add_subcommand("microwave", "magnetic-dipole (microwave) transitions with the nuclear spin, or their spectrum");
@@ -80,6 +83,14 @@ int main(int argc, char** argv) {
   auto* thermalCmd = app.add_subcommand("thermal", "phonon rates, line widths and spin coherence limit against temperature");
   addProjectOptions(thermalCmd, common);
   addThermalOptions(thermalCmd, thermalOptions);
+
+  PeaksCommandOptions peaksOptions;
+  auto* peaksCmd = app.add_subcommand("peaks", "find and fit the peaks of a measured spectrum CSV (exit 4: fit not converged)");
+  addPeaksOptions(peaksCmd, peaksOptions);
+  SpectrumFitCommandOptions spectrumFitOptions;
+  auto* spectrumFitCmd = app.add_subcommand("fit-spectrum", "fit the model directly to raw spectra, one per measurement set (exit 4: not converged)");
+  addProjectOptions(spectrumFitCmd, common);
+  addSpectrumFitOptions(spectrumFitCmd, spectrumFitOptions);
 
   try {
     app.parse(argc, argv);
@@ -98,6 +109,8 @@ int main(int argc, char** argv) {
     if (*thermalCmd) return runThermal(common, thermalOptions);
     if (*microwaveCmd) return runMicrowave(common, microwaveOptions);
     if (*lambdaCmd) return runLambdaSystems(common, lambdaOptions);
+    if (*peaksCmd) return runPeaks(peaksOptions);
+    if (*spectrumFitCmd) return runSpectrumFit(common, spectrumFitOptions);
   } catch (const finestra::InputError& e) {
     std::cerr << "finestra-cli: error: " << e.what() << '\n';
     return 2;

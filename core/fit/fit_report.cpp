@@ -3,6 +3,8 @@
 #include <cmath>
 #include <cstdio>
 
+#include "core/strain/strain_verdict.h"
+
 namespace finestra {
 namespace {
 
@@ -36,7 +38,8 @@ ordered fitJson(const Project& project, const FitResult& r) {
   doc["chi2_per_dof"] = number(r.chi2PerDof);
   ordered parameters = ordered::array();
   for (const auto& p : r.parameters)
-    parameters.push_back(ordered{{"name", p.name}, {"value", p.value}, {"stderr", number(p.standardError)}, {"free", p.free}});
+    parameters.push_back(ordered{{"name", p.name}, {"value", p.value}, {"stderr", number(p.standardError)}, {"free", p.free},
+                                 {"stderr_formal", number(p.formalError)}, {"stderr_scaled", number(p.scaledError)}});
   doc["parameters"] = parameters;
   ordered assignments = ordered::array();
   for (const auto& pk : r.peaks) {
@@ -44,9 +47,16 @@ ordered fitJson(const Project& project, const FitResult& r) {
     a["class"] = pk.line ? ordered(pk.line->cls) : ordered(nullptr);
     a["upper"] = pk.line ? ordered(pk.line->upper) : ordered(nullptr);
     a["lower"] = pk.line ? ordered(pk.line->lower) : ordered(nullptr);
-    a["residual_GHz"] = number(pk.residualGHz);
+    // An outlier's residual is its distance to the nearest line (where it really sits), not 0.
+    a["residual_GHz"] = number(pk.line ? pk.residualGHz : pk.nearestResidualGHz);
     a["label"] = pk.line ? ordered(pk.label) : ordered(nullptr);
     a["pinned"] = pk.pinned;
+    a["outlier"] = !pk.line;
+    a["nearest_label"] = pk.nearestLabel;
+    a["second_label"] = pk.secondLabel.empty() ? ordered(nullptr) : ordered(pk.secondLabel);
+    a["cost_margin"] = number(pk.costMargin);
+    if (!std::isfinite(pk.costMargin)) a["undefined_reason"] = "no second line in this measurement set";
+    a["ambiguous"] = pk.ambiguous;
     assignments.push_back(a);
   }
   doc["assignments"] = assignments;
@@ -57,6 +67,10 @@ ordered fitJson(const Project& project, const FitResult& r) {
   doc["dof"] = r.dof;
   doc["outliers"] = r.outlierCount;
   doc["starts"] = r.startsRun;
+  doc["errors_scaled"] = r.errorsScaled;
+  doc["error_note"] = r.errorNote;
+  doc["ambiguous"] = r.ambiguousCount;
+  doc["unit_check"] = r.unitCheck.empty() ? ordered(nullptr) : ordered(r.unitCheck);
   ordered names = ordered::array(), rows = ordered::array();
   for (const auto& p : r.parameters)
     if (p.free) names.push_back(p.name);
@@ -71,25 +85,32 @@ ordered fitJson(const Project& project, const FitResult& r) {
 
 Table fitParameterTable(const FitResult& r) {
   Table t;
-  t.headers = {"parameter", "value", "stderr", "start", "free"};
+  t.headers = {"parameter", "value", "stderr", "formal", "scaled", "start", "free"};
   for (const auto& p : r.parameters)
-    t.rows.push_back({p.name + (p.unit.empty() ? "" : " (" + p.unit + ")"), sig(p.value), sig(p.standardError), sig(p.startValue),
-                      p.free ? (p.determined ? "free" : "free, UNDETERMINED") : "fixed"});
+    t.rows.push_back({p.name + (p.unit.empty() ? "" : " (" + p.unit + ")"), sig(p.value), sig(p.standardError), sig(p.formalError),
+                      sig(p.scaledError), sig(p.startValue), p.free ? (p.determined ? "free" : "free, UNDETERMINED") : "fixed"});
   return t;
 }
 
 Table fitAssignmentTable(const Project& project, const FitResult& r) {
   Table t;
-  t.headers = {"measurement", "peak", "measured (GHz)", "sigma (GHz)", "class", "line", "upper", "lower", "residual (GHz)", "pull"};
+  t.headers = {"measurement", "peak", "measured (GHz)", "sigma (GHz)", "class", "line", "upper", "lower", "residual (GHz)", "pull",
+               "2nd line", "margin", "trust"};
   for (const auto& pk : r.peaks) {
     const std::string name = project.measurements[static_cast<std::size_t>(pk.measurement)].name;
+    const std::string margin = std::isfinite(pk.costMargin) ? fixed(pk.costMargin, 2) : "—";
+    const std::string second = pk.secondLabel.empty() ? "—" : pk.secondLabel;
+    const std::string trust = pk.ambiguous ? "AMBIGUOUS" : "ok";
     if (!pk.line) {
-      t.rows.push_back({name, std::to_string(pk.peak), fixed(pk.measuredGHz, 4), fixed(pk.sigmaGHz, 4), "-", "outlier", "-", "-", "-", "-"});
+      // Outliers show where they really sit: the residual to the nearest line, not 0.
+      t.rows.push_back({name, std::to_string(pk.peak), fixed(pk.measuredGHz, 4), fixed(pk.sigmaGHz, 4), "-",
+                        "outlier (nearest " + pk.nearestLabel + ")", "-", "-", fixed(pk.nearestResidualGHz, 4),
+                        fixed(pk.nearestResidualGHz / pk.sigmaGHz, 2), second, margin, "outlier"});
       continue;
     }
     t.rows.push_back({name, std::to_string(pk.peak), fixed(pk.measuredGHz, 4), fixed(pk.sigmaGHz, 4), std::to_string(pk.line->cls),
                       pk.label + (pk.pinned ? " (pinned)" : ""), std::to_string(pk.line->upper), std::to_string(pk.line->lower),
-                      fixed(pk.residualGHz, 4), fixed(pk.residualGHz / pk.sigmaGHz, 2)});
+                      fixed(pk.residualGHz, 4), fixed(pk.residualGHz / pk.sigmaGHz, 2), second, margin, trust});
   }
   return t;
 }
@@ -126,6 +147,14 @@ ordered strainJson(const Project& project, const ZeroFieldSelection& s, const Ze
   doc["zpl_shift_GHz"] = readingJson(e.zplShiftGHz);
   doc["a1g_perpendicular_strain"] = readingJson(e.a1gPerpendicular);
   doc["a1g_parallel_strain"] = readingJson(e.a1gParallel);
+  const StrainVerdict v = strainVerdict(e);
+  doc["units"] = v.units;
+  doc["readings"] = v.readings;
+  doc["readings_agree"] = v.readingsAgree;
+  doc["pure_d_verdict"] = v.pureD;
+  doc["pure_f_verdict"] = v.pureF;
+  doc["verdict"] = v.overall;
+  doc["cannot_determine"] = v.cannotDetermine;
   return doc;
 }
 
@@ -152,14 +181,20 @@ Table strainTable(const ZeroFieldStrainEstimate& e) {
   add("|eps_Eg,g| (GHz)", e.egGroundGHz, 3);
   add("|eps_Eg,u| (GHz)", e.egExcitedGHz, 3);
   add("ratio u/g", e.ratioExcitedToGround, 3);
-  addStrain("pure d: strain", e.pureD.combined);
+  addStrain("pure d: strain (1, defect frame)", e.pureD.combined);
   t.rows.push_back({"pure d: ratio expected / pull", fixed(e.pureD.ratioExpected, 3) + " / " + fixed(e.pureD.ratioPull, 2)});
-  addStrain("pure f: strain", e.pureF.combined);
+  addStrain("pure f: strain (1, defect frame)", e.pureF.combined);
   t.rows.push_back({"pure f: ratio expected / pull", fixed(e.pureF.ratioExpected, 3) + " / " + fixed(e.pureF.ratioPull, 2)});
   add("ZPL shift (GHz)", e.zplShiftGHz, 3);
   addStrain("A1g: eps_xx+eps_yy if all t_perp", e.a1gPerpendicular);
   addStrain("A1g: eps_zz if all t_par", e.a1gParallel);
   return t;
+}
+
+std::string strainVerdictText(const ZeroFieldStrainEstimate& e) {
+  const StrainVerdict v = strainVerdict(e);
+  return "Units: " + v.units + ".\n" + v.readings + ".\n" + v.pureD + "; " + v.pureF + ".\nVerdict: " + v.overall +
+         ".\nNote: " + v.cannotDetermine + ".\n";
 }
 
 }  // namespace finestra

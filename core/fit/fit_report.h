@@ -17,5 +17,7 @@ Table fitAssignmentTable(const Project& project, const FitResult& result);
 
 nlohmann::ordered_json strainJson(const Project& project, const ZeroFieldSelection& selection, const ZeroFieldStrainEstimate& e);
 Table strainTable(const ZeroFieldStrainEstimate& e);
+/// The plain verdicts (core/strain/strain_verdict.h) as sentences, printed under strainTable.
+std::string strainVerdictText(const ZeroFieldStrainEstimate& e);
 
 }  // namespace finestra

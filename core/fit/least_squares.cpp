@@ -105,6 +105,8 @@ UncertaintyAnalysis analyseUncertainty(const Eigen::MatrixXd& jac, double chi2, 
   out.chi2PerDof = out.dof > 0 ? chi2 / out.dof : std::numeric_limits<double>::quiet_NaN();
   const double nan = std::numeric_limits<double>::quiet_NaN();
   out.standardErrors = Eigen::VectorXd::Constant(n, nan);
+  out.formalErrors = out.standardErrors;
+  out.scaledErrors = out.standardErrors;
   out.correlation = Eigen::MatrixXd::Constant(n, n, nan);
   if (n == 0) return out;
 
@@ -148,13 +150,16 @@ UncertaintyAnalysis analyseUncertainty(const Eigen::MatrixXd& jac, double chi2, 
   }
   out.conditionNumber = sMinKept > 0 ? sMax / sMinKept : std::numeric_limits<double>::infinity();
   const double scale = out.dof > 0 ? out.chi2PerDof : 1.0;
+  out.errorsScaled = scale > 1.0;
   const Eigen::MatrixXd covariance = inverseNorm.asDiagonal() * covarianceNormalised * inverseNorm.asDiagonal();
   for (Eigen::Index k = 0; k < n; ++k) {
     if (undetermined[static_cast<std::size_t>(k)]) {
       out.undetermined.push_back(static_cast<int>(k));
       continue;
     }
-    out.standardErrors[k] = std::sqrt(covariance(k, k) * scale);
+    out.formalErrors[k] = std::sqrt(covariance(k, k));
+    out.scaledErrors[k] = out.formalErrors[k] * std::sqrt(scale);
+    out.standardErrors[k] = out.errorsScaled ? out.scaledErrors[k] : out.formalErrors[k];
   }
   for (Eigen::Index a = 0; a < n; ++a)
     for (Eigen::Index b = 0; b < n; ++b)

@@ -1,7 +1,8 @@
 #pragma once
 // Nonlinear least squares with Eigen's Levenberg–Marquardt (MINPACK lmder port, unsupported
-// module), and the uncertainty analysis of the solution: covariance from the Jacobian scaled by
-// the reduced χ², correlations, and the directions the data cannot determine.
+// module), and the uncertainty analysis of the solution: covariance from the Jacobian (formal
+// errors), the same scaled by the reduced χ², correlations, and the directions the data cannot
+// determine.
 #include <string>
 #include <vector>
 
@@ -40,7 +41,13 @@ LeastSquaresResult minimiseLeastSquares(const FitModel& model, const Eigen::Vect
 struct UncertaintyAnalysis {
   int dof = 0;                    ///< residuals − parameters
   double chi2PerDof = 0;          ///< NaN when dof ≤ 0
-  Eigen::VectorXd standardErrors; ///< NaN for parameters in an undetermined direction
+  Eigen::VectorXd formalErrors;   ///< √C_kk from the stated σ alone; NaN when undetermined
+  Eigen::VectorXd scaledErrors;   ///< formal · √(χ²/dof) (= formal when dof ≤ 0)
+  /// The reported errors: scaled when χ²/dof > 1 (the σ understate the scatter), formal otherwise
+  /// — a small χ²/dof from few data is no evidence the σ are too large (common practice in least
+  /// squares). NaN for parameters in an undetermined direction.
+  Eigen::VectorXd standardErrors;
+  bool errorsScaled = false;      ///< standardErrors are the scaled ones
   Eigen::MatrixXd correlation;    ///< NaN rows/columns for those parameters
   std::vector<int> undetermined;  ///< indices of parameters taking part in a null direction
   std::vector<Eigen::VectorXd> nullDirections;  ///< unit vectors in parameter space (column-normalised)
@@ -49,8 +56,9 @@ struct UncertaintyAnalysis {
 
 /// `jacobian` of the residuals (in σ units) at the solution, `chi2` there. A direction counts as
 /// undetermined when its singular value of the column-normalised Jacobian falls below
-/// `relativeThreshold` · the largest one, or when a column is numerically zero. Standard errors
-/// are √(C_kk · χ²/dof) with C the pseudo-inverse of JᵀJ on the determined subspace.
+/// `relativeThreshold` · the largest one, or when a column is numerically zero. Formal errors are
+/// √C_kk with C the pseudo-inverse of JᵀJ on the determined subspace; see standardErrors for
+/// when they are scaled by √(χ²/dof).
 UncertaintyAnalysis analyseUncertainty(const Eigen::MatrixXd& jacobian, double chi2, double relativeThreshold = 1e-6);
 
 }  // namespace finestra

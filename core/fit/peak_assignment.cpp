@@ -25,6 +25,13 @@ double linePenalty(const PredictedLine& line, double maxIntensity, const Prepare
 
 }  // namespace
 
+double assignmentLineCost(const PredictedLine& line, double maxIntensity, const PreparedPeak& peak, double tauGHz,
+                          const AssignmentOptions& o) {
+  const double z = (line.frequencyGHz - peak.frequencyGHz) / std::hypot(peak.sigmaGHz, tauGHz);
+  // Capped so that the matrix stays finite; anything above the outlier cost is never chosen.
+  return std::min(z * z, 1e6) + linePenalty(line, maxIntensity, peak, o);
+}
+
 PeakAssignments assignPeaks(const FitProblem& problem, const FitState& state, double tauGHz, const AssignmentOptions& o) {
   PeakAssignments out;
   out.lines.assign(problem.peaks.size(), std::nullopt);
@@ -57,14 +64,9 @@ PeakAssignments assignPeaks(const FitProblem& problem, const FitState& state, do
     Eigen::MatrixXd cost(static_cast<Eigen::Index>(freePeaks.size()), static_cast<Eigen::Index>(openLines.size()));
     for (std::size_t r = 0; r < freePeaks.size(); ++r) {
       const PreparedPeak& peak = problem.peaks[static_cast<std::size_t>(freePeaks[r])];
-      const double width = std::hypot(peak.sigmaGHz, tauGHz);
-      for (std::size_t c = 0; c < openLines.size(); ++c) {
-        const PredictedLine& line = lines[static_cast<std::size_t>(openLines[c])];
-        const double z = (line.frequencyGHz - peak.frequencyGHz) / width;
-        // Capped so that the matrix stays finite; anything above the outlier cost is never chosen.
+      for (std::size_t c = 0; c < openLines.size(); ++c)
         cost(static_cast<Eigen::Index>(r), static_cast<Eigen::Index>(c)) =
-            std::min(z * z, 1e6) + linePenalty(line, maxIntensity, peak, o);
-      }
+            assignmentLineCost(lines[static_cast<std::size_t>(openLines[c])], maxIntensity, peak, tauGHz, o);
     }
     const auto chosen = solveAssignmentWithOutliers(cost, o.outlierCost);
     out.cost += assignmentCost(cost, chosen, o.outlierCost);

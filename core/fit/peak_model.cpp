@@ -25,7 +25,7 @@ std::optional<LineRef> readPin(const MeasuredPeak& p, const std::vector<int>& cl
 
 }  // namespace
 
-FitProblem prepareFitProblem(const Project& project, const std::optional<std::vector<std::string>>& freeNames) {
+FitProblem prepareFitProblem(const Project& project, const std::optional<std::vector<std::string>>& freeNames, bool peaksRequired) {
   FitProblem problem;
   problem.baseSetup = makeModelSetup(project);
   const CentreModel probe(problem.baseSetup);  // validates the centre before any fit work
@@ -63,7 +63,7 @@ FitProblem prepareFitProblem(const Project& project, const std::optional<std::ve
     }
     problem.sets.push_back(set);
   }
-  if (problem.peaks.empty()) throw InputError("measurements", "the project has no measured peaks to fit");
+  if (problem.peaks.empty() && peaksRequired) throw InputError("measurements", "the project has no measured peaks to fit");
   return problem;
 }
 

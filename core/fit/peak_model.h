@@ -41,8 +41,10 @@ struct FitProblem {
   int levelsPerManifold = 4;
 };
 
-/// `freeNames` replaces project.fit.free when given.
-FitProblem prepareFitProblem(const Project& project, const std::optional<std::vector<std::string>>& freeNames = std::nullopt);
+/// `freeNames` replaces project.fit.free when given. `peaksRequired`: InputError when the project
+/// has no measured peaks (a spectrum fit needs the sets' fields but not their peaks).
+FitProblem prepareFitProblem(const Project& project, const std::optional<std::vector<std::string>>& freeNames = std::nullopt,
+                             bool peaksRequired = true);
 
 /// Internal fit variables: x_k = (value_k − start value_k)/scale_k.
 FitState stateFromVariables(const FitProblem& problem, const Eigen::VectorXd& x);

@@ -10,6 +10,7 @@
 
 #include "core/common/errors.h"
 #include "core/common/parallel.h"
+#include "core/fit/assignment_trust.h"
 
 namespace finestra {
 namespace {
@@ -105,6 +106,8 @@ std::string formatCoefficient(double c) {
   return buffer;
 }
 
+}  // namespace
+
 std::string describeDirection(const Eigen::VectorXd& direction, const std::vector<FitParameterSpec>& free) {
   std::string text;
   for (Eigen::Index k = 0; k < direction.size(); ++k) {
@@ -116,6 +119,8 @@ std::string describeDirection(const Eigen::VectorXd& direction, const std::vecto
   }
   return text;
 }
+
+namespace {
 
 std::string lineLabel(const CentreModel& model, const FitProblem& problem, const FitState& state, int set, const LineRef& ref) {
   const ClassSolution solution = model.solve(ref.cls, setFieldCrystal(problem, state, set));
@@ -173,8 +178,10 @@ FitResult fitProject(const Project& project, const FitOptions& o) {
   const std::size_t n = problem->free.size();
   for (std::size_t k = 0; k < n; ++k) {
     const FitParameterSpec& spec = problem->free[k];
-    FittedParameter p{spec.name, spec.unit, fitValue(state, spec),
-                      analysis.standardErrors[static_cast<Eigen::Index>(k)] * spec.scale, fitValue(problem->start, spec), true, true};
+    const auto kk = static_cast<Eigen::Index>(k);
+    FittedParameter p{spec.name, spec.unit, fitValue(state, spec), analysis.standardErrors[kk] * spec.scale,
+                      analysis.formalErrors[kk] * spec.scale, analysis.scaledErrors[kk] * spec.scale,
+                      fitValue(problem->start, spec), true, true};
     if (!std::isfinite(p.standardError)) p.determined = false;
     if (!p.determined) result.undetermined.push_back(spec.name);
     result.parameters.push_back(p);
@@ -187,8 +194,8 @@ FitResult fitProject(const Project& project, const FitOptions& o) {
     const bool isFree = std::any_of(problem->free.begin(), problem->free.end(), [&](const auto& s) { return s.name == name; });
     if (isFree) continue;
     const FitParameterSpec spec = *findFitParameter(name);
-    result.parameters.push_back({name, spec.unit, fitValue(state, spec), std::numeric_limits<double>::quiet_NaN(),
-                                 fitValue(problem->start, spec), false, true});
+    const double nan = std::numeric_limits<double>::quiet_NaN();
+    result.parameters.push_back({name, spec.unit, fitValue(state, spec), nan, nan, nan, fitValue(problem->start, spec), false, true});
   }
 
   const CentreModel fitted(fitStateSetup(winner.state, problem->baseSetup));
@@ -196,9 +203,16 @@ FitResult fitProject(const Project& project, const FitOptions& o) {
   std::vector<double> predictedOf(problem->peaks.size(), std::numeric_limits<double>::quiet_NaN());
   for (std::size_t k = 0; k < model.assignedPeaks().size(); ++k)
     predictedOf[static_cast<std::size_t>(model.assignedPeaks()[k])] = predicted[static_cast<Eigen::Index>(k)];
+  const std::vector<PeakAlternatives> alternatives = rankPeakAlternatives(*problem, winner.state, winner.assignment, o.assignment);
   for (std::size_t i = 0; i < problem->peaks.size(); ++i) {
     const PreparedPeak& peak = problem->peaks[i];
     FittedPeak fp;
+    fp.secondLabel = alternatives[i].secondLabel;
+    fp.costMargin = alternatives[i].costMargin;
+    fp.ambiguous = alternatives[i].ambiguous;
+    fp.nearestLabel = alternatives[i].nearestLabel;
+    fp.nearestResidualGHz = alternatives[i].nearestResidualGHz;
+    if (fp.ambiguous) ++result.ambiguousCount;
     fp.measurement = peak.set;
     fp.peak = peak.peak;
     fp.line = winner.assignment[i];
@@ -226,6 +240,16 @@ FitResult fitProject(const Project& project, const FitOptions& o) {
     result.status = "not converged: " + leastSquaresStatusText(winner.solver.status) + " (" + winner.solver.detail + ")";
   }
   if (result.dof <= 0) result.status += "; no degrees of freedom left, uncertainties not scaled";
+  result.errorsScaled = analysis.errorsScaled;
+  char note[200];
+  if (result.dof <= 0) std::snprintf(note, sizeof note, "no degrees of freedom left: formal errors from the peaks' sigma only");
+  else if (result.errorsScaled)
+    std::snprintf(note, sizeof note, "chi2/dof = %.3g > 1: standard errors scaled by sqrt(chi2/dof) = %.3g", result.chi2PerDof,
+                  std::sqrt(result.chi2PerDof));
+  else
+    std::snprintf(note, sizeof note, "chi2/dof = %.3g <= 1: formal standard errors from the peaks' sigma, not scaled down", result.chi2PerDof);
+  result.errorNote = note;
+  result.unitCheck = checkPeakUnits(project, *problem, winner.state, result.outlierCount);
   return result;
 }
 

@@ -45,9 +45,22 @@ TEST(FitDesign, StraightLineMatchesNormalEquations) {
   model.jacobian(r.x, jac);
   EXPECT_LT((jac - design).cwiseAbs().maxCoeff(), 1e-7) << "central differences of a linear model are exact";
   const auto u = analyseUncertainty(jac, r.chi2);
-  const Eigen::Matrix2d cov = (design.transpose() * design).inverse() * (r.chi2 / 3.0);
-  EXPECT_NEAR(u.standardErrors[0], std::sqrt(cov(0, 0)), 1e-9);
-  EXPECT_NEAR(u.standardErrors[1], std::sqrt(cov(1, 1)), 1e-9);
+  // Unit σ: the formal covariance is (DᵀD)⁻¹; the scaled one multiplies it by χ²/dof, and the
+  // reported errors are the scaled ones only when χ²/dof > 1 (here χ²/dof ≈ 0.05: formal).
+  const Eigen::Matrix2d formal = (design.transpose() * design).inverse();
+  const Eigen::Matrix2d cov = formal * (r.chi2 / 3.0);
+  ASSERT_LT(r.chi2 / 3.0, 1.0);
+  EXPECT_FALSE(u.errorsScaled);
+  EXPECT_NEAR(u.formalErrors[0], std::sqrt(formal(0, 0)), 1e-9);
+  EXPECT_NEAR(u.scaledErrors[0], std::sqrt(cov(0, 0)), 1e-9);
+  EXPECT_NEAR(u.scaledErrors[1], std::sqrt(cov(1, 1)), 1e-9);
+  EXPECT_NEAR(u.standardErrors[0], std::sqrt(formal(0, 0)), 1e-9);
+  EXPECT_NEAR(u.standardErrors[1], std::sqrt(formal(1, 1)), 1e-9);
+  // The same data with σ = 0.1 (residuals ×10, χ² ×100): χ²/dof > 1, so the errors are scaled.
+  const auto tight = analyseUncertainty(jac * 10.0, r.chi2 * 100.0);
+  ASSERT_GT(r.chi2 * 100.0 / 3.0, 1.0);
+  EXPECT_TRUE(tight.errorsScaled);
+  EXPECT_NEAR(tight.standardErrors[0], std::sqrt(cov(0, 0)), 1e-9);
   EXPECT_NEAR(u.correlation(0, 1), cov(0, 1) / std::sqrt(cov(0, 0) * cov(1, 1)), 1e-9);
   EXPECT_TRUE(u.undetermined.empty());
 }

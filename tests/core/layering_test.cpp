@@ -17,9 +17,9 @@ namespace {
 namespace fs = std::filesystem;
 
 // Bottom first. A module may include only modules listed before it.
-constexpr std::array<std::string_view, 16> kLayerOrder{
-    "common", "units",  "crystal", "centre", "hamiltonian", "model", "project", "thermal",
-    "io",     "optics", "sweep",   "strain", "resonance",   "report", "fit",     "planner"};
+constexpr std::array<std::string_view, 17> kLayerOrder{
+    "common", "units",  "crystal", "centre",    "hamiltonian", "model", "project", "thermal", "io",
+    "optics", "sweep",  "strain",  "resonance", "report",      "fit",   "peaks",   "planner"};
 
 const fs::path kSourceDir{FINESTRA_SOURCE_DIR};
 
