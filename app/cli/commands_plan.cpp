@@ -4,6 +4,7 @@
 #include <iostream>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
 #include "core/project/field_semantics.h"
@@ -81,7 +82,7 @@ void addPlanOptions(CLI::App* cmd, PlanOptions& o) {
   cmd->add_option("--direction-lab", o.directionLab, "profile: true field direction in the lab, x,y,z (default: the project's true field)")->delimiter(',');
   cmd->add_option("--max-T", o.maxT, "profile: largest magnitude (default: the first magnitude)");
   cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(2, 100000));
-  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(0.05, 90.0));
+  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(limits::kMinMapStepDeg, 90.0));
 }
 
 int runPlan(const CommonOptions& common, const PlanOptions& o) {

@@ -3,7 +3,9 @@
 #include <cmath>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/json_reader.h"
+#include "core/io/measured_validity.h"
 #include "core/io/project_file.h"
 #include "core/io/text_file.h"
 
@@ -40,6 +42,8 @@ CentreChoice readCentre(const JsonObjectReader& r) {
     auto& target = std::string(section) == "parameters" ? c.overrides : c.assumed;
     for (const auto& [key, value] : r.raw(section).items()) {
       if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
+      if (paramInfo(*findParam(key)).hyperfine && &target == &c.overrides && !c.isotope)
+        throw InputError(params.keyPath(key), "is a hyperfine value, but no isotope is chosen (set centre.isotope)");
       target[key] = finiteNumber(value, params.keyPath(key));
     }
   }
@@ -74,11 +78,17 @@ FieldSetting readField(const JsonObjectReader& r) {
     requireFieldInRange(f.magnitudeT, r.keyPath("magnitude_T"));
     f.polarDeg = r.number("polar_deg", 0.0);
     f.azimuthDeg = r.number("azimuth_deg", 0.0);
-  } else if (r.has("vector_lab_T")) {
+  } else {
+    // Angles belong to magnitude_T only; next to a vector they would be silently ignored.
+    for (const char* angle : {"polar_deg", "azimuth_deg"})
+      if (r.has(angle))
+        throw InputError(r.keyPath(angle), "is used only with magnitude_T; the field here is given as a vector");
+  }
+  if (r.has("vector_lab_T")) {
     f.form = FieldSetting::Form::VectorLab;
     f.vector = r.vec3("vector_lab_T");
     requireFieldInRange(f.vector.norm(), r.keyPath("vector_lab_T"));
-  } else {
+  } else if (r.has("vector_crystal_T")) {
     f.form = FieldSetting::Form::VectorCrystal;
     f.vector = r.vec3("vector_crystal_T");
     requireFieldInRange(f.vector.norm(), r.keyPath("vector_crystal_T"));
@@ -159,7 +169,8 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   s.from = r.number("from");
   s.to = r.number("to");
   s.points = r.integer("points", s.points);
-  if (s.points < 2 || s.points > 1000000) throw InputError(r.keyPath("points"), "must be between 2 and 1000000");
+  if (s.points < 2 || s.points > limits::kMaxSweepPoints)
+    throw InputError(r.keyPath("points"), "must be between 2 and " + std::to_string(limits::kMaxSweepPoints));
   if (s.kind == SweepKind::Magnitude && (s.from < 0 || s.to < 0))
     throw InputError(r.keyPath("from"), "field magnitudes must not be negative");
   if (s.kind == SweepKind::Temperature && !(s.from >= 0 && s.to >= 0 && s.from <= 1000 && s.to <= 1000))
@@ -186,12 +197,12 @@ MeasuredPeak readPeak(const JsonObjectReader& r) {
   p.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
   p.position = r.number("position");
   try {
-    (void)toAbsoluteGHz(p.position, p.unit, 1.0);
+    checkMeasuredPosition(p.position, p.unit, "");
   } catch (const InputError& e) {
     throw InputError(r.keyPath("position"), e.what());
   }
   p.sigma = r.number("sigma");
-  if (p.sigma <= 0) throw InputError(r.keyPath("sigma"), "uncertainty must be positive");
+  checkPeakSigma(p.sigma, p.position, p.unit, r.keyPath("sigma"));
   p.analyserLab = r.optionalVec3("analyser_lab");
   if (p.analyserLab && p.analyserLab->norm() < 1e-12) throw InputError(r.keyPath("analyser_lab"), "vector is zero");
   if (!r.isNull("assign")) {
@@ -268,6 +279,8 @@ MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
     throw InputError(r.keyPath("signal"), "has " + std::to_string(m.signal.size()) + " values but position has " +
                                               std::to_string(m.position.size()));
   if (m.position.size() < 2) throw InputError(r.keyPath("position"), "needs at least two points");
+  for (std::size_t i = 0; i < m.position.size(); ++i)
+    checkMeasuredPosition(m.position[i], m.unit, r.keyPath("position") + "[" + std::to_string(i) + "]");
   return m;
 }
 

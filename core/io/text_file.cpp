@@ -7,6 +7,7 @@
 #include <unistd.h>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 
 namespace finestra {
 
@@ -15,10 +16,17 @@ std::string readTextFile(const std::string& path) {
   if (std::filesystem::is_directory(path, ec)) throw InputError(path, "is a folder, not a file");
   std::ifstream in(path, std::ios::binary);
   if (!in) throw InputError(path, "cannot open file for reading");
-  std::ostringstream ss;
-  ss << in.rdbuf();
+  // Read in blocks and stop at the limit: a device (/dev/zero) or a pipe has no size to ask for.
+  std::string text;
+  char block[65536];
+  while (in.read(block, sizeof block) || in.gcount() > 0) {
+    text.append(block, static_cast<std::size_t>(in.gcount()));
+    if (text.size() > limits::kMaxInputFileBytes)
+      throw InputError(path, "file is larger than the limit of " + std::to_string(limits::kMaxInputFileBytes / (1024 * 1024)) +
+                                 " MiB for an input file");
+  }
   if (in.bad()) throw InputError(path, "read error");
-  return ss.str();
+  return text;
 }
 
 void writeFileAtomically(const std::string& path, const std::string& text) {

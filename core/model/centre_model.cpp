@@ -32,8 +32,13 @@ void validateConditions(const DetectionConditions& c) {
 
 // Largest field and strain the model accepts. Far beyond any laboratory value (the engine is
 // tested to 30 T and 1e-2); past them the linear model means nothing and sums lose all precision.
+// Strain enters through susceptibilities of order 1 PHz per unit strain (docs/physics.md, Strain):
+// a first-order expansion that at 50 % would move the ZPL by hundreds of THz, past zero. 5 % is ten
+// times the strain of strained membranes and cantilevers and about half the largest elastic strain
+// reported for diamond at all (~9 % in nanoneedles, Banerjee et al., Science 360, 300 (2018), from
+// memory).
 constexpr double kMaxFieldT = 1000.0;
-constexpr double kMaxStrain = 1.0;
+constexpr double kMaxStrain = 0.05;
 
 std::string shortNumber(double x) {
   std::ostringstream out;
@@ -44,7 +49,7 @@ std::string shortNumber(double x) {
 void validateStrain(const StrainSetting& s) {
   if (!s.crystal.allFinite()) throw InputError("strain.crystal", "component is not a finite number");
   if (s.crystal.cwiseAbs().maxCoeff() > kMaxStrain)
-    throw InputError("strain.crystal", "component above 1 (100 % strain) is outside the model");
+    throw InputError("strain.crystal", "component above 0.05 (5 % strain) is outside the model");
   if ((s.crystal - s.crystal.transpose()).cwiseAbs().maxCoeff() > 1e-15)
     throw InputError("strain.crystal", "tensor must be symmetric");
   for (const EgStrain* e : {&s.extraGround, &s.extraExcited})
@@ -105,7 +110,7 @@ ManifoldEigen CentreModel::levels(Manifold m, int cls, const Vec3& fieldCrystal,
     throw InputError("field", "magnitude " + shortNumber(fieldCrystal.norm()) +
                                   " T is too large for this model (at most 1000 T)");
   if (strainOverride && !(strainOverride->cwiseAbs().maxCoeff() <= kMaxStrain))
-    throw InputError("strain", "a strain component is not finite or above 1 (100 % strain)");
+    throw InputError("strain", "a strain component is not finite or above 0.05 (5 % strain)");
   ManifoldEigen out = diagonalise(manifold(m), strainFor(m, cls, strainOverride), defectFrame(cls) * fieldCrystal);
   if (!out.energies.allFinite() || !out.vectors.allFinite())
     throw InputError("centre.parameters", "the computation gave non-finite energies (a value is far too large)");

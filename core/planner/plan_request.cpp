@@ -4,6 +4,7 @@
 #include <limits>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/json_reader.h"
 #include "core/io/text_file.h"
 
@@ -109,6 +110,8 @@ PlanRequest parsePlanRequest(const std::string& text, const std::string& origin,
     }
     request.bestCount = r.integer("best", request.bestCount);
     request.settings.gapScanSamples = r.integer("gap_scan_samples", request.settings.gapScanSamples);
+    if (request.settings.gapScanSamples < 2 || request.settings.gapScanSamples > limits::kMaxGapScanSamples)
+      throw InputError("gap_scan_samples", "must be between 2 and " + std::to_string(limits::kMaxGapScanSamples));
   } catch (const InputError& e) {
     const std::string where = e.where().empty() ? origin : origin + ": " + e.where();
     throw InputError(where, std::string(e.what()).substr(e.where().empty() ? 0 : e.where().size() + 2));
