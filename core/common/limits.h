@@ -20,6 +20,10 @@ inline constexpr std::size_t kMaxPeakRows = 10000;
 /// of a report; 256 bytes is a long sentence.
 inline constexpr std::size_t kMaxNameBytes = 256;
 
+/// Field magnitude (T) every reader accepts, the limit the model enforces (core/model): far beyond
+/// any laboratory magnet; past it the linear Zeeman model means nothing.
+inline constexpr double kMaxFieldT = 1000.0;
+
 /// Points of one sweep. A sweep keeps every point's levels and lines for all classes (about 66 kB
 /// per point without an isotope, four times that with the 2I+1 = 2 nuclear states of 29Si) and its
 /// JSON output about as much again: 10 000 points stay below ~3 GB in the worst case.

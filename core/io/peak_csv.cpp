@@ -109,6 +109,7 @@ std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::str
       throw InputError(where, "measurement: name longer than " + std::to_string(limits::kMaxNameBytes) + " bytes");
     const double field = row.number(Field);
     if (field < 0) throw InputError(where, "field_T: must not be negative");
+    if (field > limits::kMaxFieldT) throw InputError(where, "field_T: too large for this model (at most 1000 T)");
     setting.field = FieldSetting::fromAngles(field, row.number(Polar), row.number(Azimuth));
     setting.temperatureK = row.optionalNumber(Temperature).value_or(4.0);
     if (setting.temperatureK < 0) throw InputError(where, "temperature_K: must not be negative");

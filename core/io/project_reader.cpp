@@ -58,7 +58,7 @@ SampleSetting readSample(const JsonObjectReader& r) {
 
 // Largest field accepted (T), the limit CentreModel enforces; checked here too so that the message
 // names the key and file.
-constexpr double kMaxFieldT = 1000.0;
+constexpr double kMaxFieldT = limits::kMaxFieldT;
 
 void requireFieldInRange(double magnitudeT, const std::string& where) {
   if (magnitudeT > kMaxFieldT) throw InputError(where, "field is too large for this model (at most 1000 T)");

@@ -288,3 +288,9 @@ TEST(BadTextInput, StrainOfFivePercentIsTheStatedLimit) {
   p.strain.crystal(2, 2) = 0.5;
   expectMessage(messageOf([&] { CentreModel m(makeModelSetup(p)); }), {"strain.crystal", "0.05", "outside the model"});
 }
+
+TEST(BadTextInput, PeakCsvFieldBeyondWhatAProjectAcceptsIsRefusedAtImport) {
+  // What the import accepts, the project reader must open again: both stop at 1000 T.
+  expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,5000,0,0,406.7,THz,0.0001\n", "strong.csv"); }),
+                {"strong.csv:2", "field_T", "at most 1000 T"});
+}
