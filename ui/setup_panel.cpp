@@ -104,7 +104,8 @@ QWidget* SetupPanel::buildCentre() {
   connect(preset_, &QComboBox::activated, this, [this](int index) {
     const std::string name = preset_->itemData(index).toString().toStdString();
     document_.edit(tr("Choose centre %1").arg(QString::fromStdString(name)), Change::Centre, [&](Project& p) {
-      p.centre = CentreChoice{name, std::nullopt, {}};
+      p.centre = CentreChoice{};
+      p.centre.preset = name;
     });
   });
   connect(isotope_, &QComboBox::activated, this, [this](int index) {
