@@ -24,6 +24,11 @@ inline constexpr std::size_t kMaxNameBytes = 256;
 /// any laboratory magnet; past it the linear Zeeman model means nothing.
 inline constexpr double kMaxFieldT = 1000.0;
 
+/// Extra E-strain splitting (GHz) a project may give. Strain susceptibilities are of order
+/// 1 PHz per unit strain (docs/physics.md, Strain), so the 5 % strain limit of the model
+/// (core/model) corresponds to about 5 × 10^4 GHz; 10^5 GHz leaves a factor of two.
+inline constexpr double kMaxEgStrainGHz = 1.0e5;
+
 /// Points of one sweep. A sweep keeps every point's levels and lines for all classes (about 66 kB
 /// per point without an isotope, four times that with the 2I+1 = 2 nuclear states of 29Si) and its
 /// JSON output about as much again: 10 000 points stay below ~3 GB in the worst case.

@@ -106,6 +106,8 @@ EgStrain readEg(const JsonObjectReader& r) {
   r.allowOnly({"magnitude_GHz", "angle_deg"});
   EgStrain e{r.number("magnitude_GHz"), r.number("angle_deg", 0.0)};
   if (e.magnitudeGHz < 0) throw InputError(r.keyPath("magnitude_GHz"), "must not be negative");
+  if (e.magnitudeGHz > limits::kMaxEgStrainGHz)
+    throw InputError(r.keyPath("magnitude_GHz"), "too large for this model (at most 1e5 GHz, about 5 % strain)");
   return e;
 }
 
