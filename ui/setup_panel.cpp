@@ -15,6 +15,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "core/common/limits.h"
 #include "core/common/errors.h"
 #include "core/centre/presets.h"
 #include "core/project/field_semantics.h"
@@ -228,7 +229,7 @@ QWidget* SetupPanel::buildStrain() {
   auto* layout = new QVBoxLayout;
   auto* grid = new QGridLayout;
   for (std::size_t i = 0; i < 6; ++i) {
-    strain_[i] = spinBox(-1e5, 1e5, 3, "");
+    strain_[i] = spinBox(-limits::kMaxStrain / kStrainScale, limits::kMaxStrain / kStrainScale, 3, "");
     grid->addWidget(new QLabel(QStringLiteral("\u03b5_%1").arg(kStrainNames[i])), static_cast<int>(i / 3) * 2, static_cast<int>(i % 3));
     grid->addWidget(strain_[i], static_cast<int>(i / 3) * 2 + 1, static_cast<int>(i % 3));
     connect(strain_[i], &QDoubleSpinBox::valueChanged, this, [this, i](double v) {
@@ -244,7 +245,7 @@ QWidget* SetupPanel::buildStrain() {
   auto* eg = new QFormLayout;
   const std::array<QString, 4> names{tr("ground |\u03b5_Eg| (GHz)"), tr("ground angle"), tr("excited |\u03b5_Eg| (GHz)"), tr("excited angle")};
   for (std::size_t i = 0; i < 4; ++i) {
-    egStrain_[i] = i % 2 == 0 ? spinBox(0, 1e4, 3, "") : spinBox(-360, 360, 2, "\u00b0");
+    egStrain_[i] = i % 2 == 0 ? spinBox(0, limits::kMaxEgStrainGHz, 3, "") : spinBox(-360, 360, 2, "\u00b0");
     eg->addRow(names[i], egStrain_[i]);
     connect(egStrain_[i], &QDoubleSpinBox::valueChanged, this, [this, i](double v) {
       document_.edit(tr("E-type strain"), Change::Strain, [&](Project& p) {
@@ -325,7 +326,7 @@ QWidget* SetupPanel::buildSweep() {
   sweepFrom_ = spinBox(-1e4, 1e4, 3, "");
   sweepTo_ = spinBox(-1e4, 1e4, 3, "");
   sweepPoints_ = new QSpinBox;
-  sweepPoints_->setRange(2, 20000);
+  sweepPoints_->setRange(2, limits::kMaxSweepPoints);
   sweepPoints_->setKeyboardTracking(false);
   form->addRow(tr("Sweep for the plots"), sweep_);
   form->addRow(tr("from"), sweepFrom_);

@@ -24,6 +24,9 @@ inline constexpr std::size_t kMaxNameBytes = 256;
 /// any laboratory magnet; past it the linear Zeeman model means nothing.
 inline constexpr double kMaxFieldT = 1000.0;
 
+/// Largest strain component the model accepts (core/model/centre_model.cpp gives the physics).
+inline constexpr double kMaxStrain = 0.05;
+
 /// Extra E-strain splitting (GHz) a project may give. Strain susceptibilities are of order
 /// 1 PHz per unit strain (docs/physics.md, Strain), so the 5 % strain limit of the model
 /// (core/model) corresponds to about 5 × 10^4 GHz; 10^5 GHz leaves a factor of two.

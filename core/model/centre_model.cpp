@@ -6,6 +6,7 @@
 #include <sstream>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/model/dipole.h"
 #include "core/model/tracking.h"
 #include "core/units/linewidth.h"
@@ -38,7 +39,7 @@ void validateConditions(const DetectionConditions& c) {
 // reported for diamond at all (~9 % in nanoneedles, Banerjee et al., Science 360, 300 (2018), from
 // memory).
 constexpr double kMaxFieldT = 1000.0;
-constexpr double kMaxStrain = 0.05;
+constexpr double kMaxStrain = limits::kMaxStrain;
 
 std::string shortNumber(double x) {
   std::ostringstream out;
