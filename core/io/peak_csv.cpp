@@ -96,9 +96,11 @@ std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::str
       headerCells = cells.size();
       continue;
     }
-    if (cells.size() > headerCells)
-      throw InputError(where, std::to_string(cells.size()) + " cells, but the header has " + std::to_string(headerCells) +
-                                  " columns (a stray comma or an unquoted comma inside a name?)");
+    // Empty trailing cells (a spreadsheet's trailing commas) carry nothing; a value there would be lost.
+    for (std::size_t extra = headerCells; extra < cells.size(); ++extra)
+      if (!cells[extra].empty())
+        throw InputError(where, std::to_string(cells.size()) + " cells, but the header has " + std::to_string(headerCells) +
+                                    " columns (a stray comma or an unquoted comma inside a name?)");
     if (++peakRows > limits::kMaxPeakRows)
       throw InputError(where, "more than " + std::to_string(limits::kMaxPeakRows) + " peak rows (the limit of a peaks file)");
     const RowReader row{cells, *header, where};
