@@ -131,7 +131,9 @@ TEST(BadInputCli, PlannerProfileThroughZeroFieldReportsUndefinedFiguresWithAReas
     std::string lower = r.out;
     for (auto& c : lower) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
     EXPECT_EQ(lower.find("nan"), std::string::npos) << r.out;
-    if (std::string(format) == "json") EXPECT_NE(r.out.find("\"undefined_reason\""), std::string::npos) << r.out;
+    if (std::string(format) == "json") {
+      EXPECT_NE(r.out.find("\"undefined_reason\""), std::string::npos) << r.out;
+    }
   }
 }
 
