@@ -42,8 +42,6 @@ CentreChoice readCentre(const JsonObjectReader& r) {
     auto& target = std::string(section) == "parameters" ? c.overrides : c.assumed;
     for (const auto& [key, value] : r.raw(section).items()) {
       if (!findParam(key)) throw InputError(params.keyPath(key), "unknown parameter key");
-      if (paramInfo(*findParam(key)).hyperfine && &target == &c.overrides && !c.isotope)
-        throw InputError(params.keyPath(key), "is a hyperfine value, but no isotope is chosen (set centre.isotope)");
       target[key] = finiteNumber(value, params.keyPath(key));
     }
   }

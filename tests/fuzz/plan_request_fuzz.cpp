@@ -11,8 +11,9 @@
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {
   const std::string text(reinterpret_cast<const char*>(data), size);
+  const finestra::PlanRequest defaults;
   try {
-    const finestra::PlanRequest request = finestra::parsePlanRequest(text, "fuzz-plan.json", finestra::PlanRequest{});
+    const finestra::PlanRequest request = finestra::parsePlanRequest(text, "fuzz-plan.json", defaults);
     finestra::validatePlanRequest(request);
     (void)finestra::reachableDirections(request.reach);
   } catch (const finestra::InputError&) {
