@@ -54,6 +54,12 @@ SampleSetting readSample(const JsonObjectReader& r) {
   return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
+// Names are copied into every row of a report: a stated limit keeps a pasted megabyte out.
+void requireNameLength(const std::string& name, const std::string& where) {
+  if (name.size() > limits::kMaxNameBytes)
+    throw InputError(where, "longer than " + std::to_string(limits::kMaxNameBytes) + " bytes");
+}
+
 // Largest field accepted (T), the limit CentreModel enforces; checked here too so that the message
 // names the key and file.
 constexpr double kMaxFieldT = limits::kMaxFieldT;
@@ -160,6 +166,7 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   r.allowOnly({"name", "kind", "from", "to", "points", "plane_normal_lab", "start_lab", "strain_to"});
   SweepSpec s;
   s.name = r.string("name", "");
+  requireNameLength(s.name, r.keyPath("name"));
   const std::string kind = r.string("kind");
   if (kind == "magnitude") s.kind = SweepKind::Magnitude;
   else if (kind == "angle") s.kind = SweepKind::Angle;
@@ -221,6 +228,7 @@ MeasurementSet readMeasurement(const JsonObjectReader& r) {
   r.allowOnly({"name", "temperature_K", "field", "peaks"});
   MeasurementSet m;
   m.name = r.string("name", "");
+  requireNameLength(m.name, r.keyPath("name"));
   m.temperatureK = r.number("temperature_K", m.temperatureK);
   if (m.temperatureK < 0) throw InputError(r.keyPath("temperature_K"), "must not be negative");
   m.field = readField(r.object("field"));
@@ -272,6 +280,7 @@ MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
   r.allowOnly({"name", "unit", "position", "signal"});
   MeasuredSpectrum m;
   m.name = r.string("name", "");
+  requireNameLength(m.name, r.keyPath("name"));
   m.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
   m.position = readNumbers(r.raw("position"), r.keyPath("position"));
   m.signal = readNumbers(r.raw("signal"), r.keyPath("signal"));
