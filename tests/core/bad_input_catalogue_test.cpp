@@ -23,6 +23,7 @@
 #include "core/project/model_setup.h"
 #include "core/project/evaluate.h"
 #include "core/optics/spectrum.h"
+#include "core/report/table.h"
 #include "core/units/spectral_units.h"
 
 using namespace finestra;
@@ -293,4 +294,12 @@ TEST(BadTextInput, PeakCsvFieldBeyondWhatAProjectAcceptsIsRefusedAtImport) {
   // What the import accepts, the project reader must open again: both stop at 1000 T.
   expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,5000,0,0,406.7,THz,0.0001\n", "strong.csv"); }),
                 {"strong.csv:2", "field_T", "at most 1000 T"});
+}
+
+TEST(BadTextInput, UndefinedCellsKeepTableColumnsAligned) {
+  const Table t{{"value", "next"}, {{"—", "x"}, {"12345", "y"}}};
+  const std::string text = t.toText();
+  // Every line has the "next" column at the same terminal column: "—" counts as one.
+  EXPECT_NE(text.find("    —     x\n"), std::string::npos) << text;
+  EXPECT_NE(text.find("12345     y\n"), std::string::npos) << text;
 }
