@@ -15,7 +15,7 @@ cc="$(command -v clang-14 || command -v clang || true)"
 cmake -S "$root" -B "$build" -G Ninja -DCMAKE_BUILD_TYPE=RelWithDebInfo \
   -DCMAKE_C_COMPILER="$cc" -DCMAKE_CXX_COMPILER="$cxx" \
   -DFINESTRA_FUZZ=ON -DFINESTRA_SANITIZE=ON -DFINESTRA_BUILD_GUI=OFF -DFINESTRA_BUILD_BENCH=OFF
-targets=(project_reader peak_csv spectrum_csv)
+targets=(project_reader peak_csv spectrum_csv plan_request project_sections)
 cmake --build "$build" -j"$(nproc)" --target "${targets[@]/%/_fuzzer}"
 
 export ASAN_OPTIONS="${ASAN_OPTIONS:-detect_leaks=1:abort_on_error=1}"

@@ -48,7 +48,9 @@ Autosaver::~Autosaver() = default;
 void Autosaver::saveNow() {
   if (!document_.isModified() || document_.revision() == savedRevision_) return;
   try {
-    writeFileAtomically(originFile(folder_, sessionId_).toStdString(), document_.filePath().toStdString());
+    // Absolute: recovery may run from another working folder and must restore to the original file.
+    writeFileAtomically(originFile(folder_, sessionId_).toStdString(),
+                        (document_.filePath().isEmpty() ? QString() : QFileInfo(document_.filePath()).absoluteFilePath()).toStdString());
     writeFileAtomically(projectFile(folder_, sessionId_).toStdString(), projectToJson(document_.project()));
     savedRevision_ = document_.isModified() ? ~quint64{0} : document_.revision();
     spdlog::debug("autosaved to {}", projectFile(folder_, sessionId_).toStdString());

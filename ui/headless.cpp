@@ -26,6 +26,10 @@ void runHeadlessExport(const HeadlessExport& job) {
     document.edit("Import peaks", [&](Project& p) { p.measurements.insert(p.measurements.end(), sets.begin(), sets.end()); });
   }
   if (!job.spectrumCsv.isEmpty()) document.setMeasuredSpectrum(readSpectrumCsv(job.spectrumCsv.toStdString()));
+  const int sweepCount = static_cast<int>(document.project().sweeps.size());
+  if (job.display.sweepIndex < 0 || (job.display.sweepIndex >= sweepCount && job.display.sweepIndex != 0))
+    throw InputError("--sweep", "index " + std::to_string(job.display.sweepIndex) + " but the project has " +
+                                    std::to_string(sweepCount) + " sweeps (indices from 0)");
   ComputeRequest request;
   request.project = document.project();
   request.parts = entry->parts;

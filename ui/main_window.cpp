@@ -227,6 +227,10 @@ bool MainWindow::importPeaks(const QString& path) {
     spdlog::error("{}", e.what());
     QMessageBox::warning(this, tr("Cannot import peaks"), QString::fromStdString(e.what()) + tr("\n\nNothing was changed."));
     return false;
+  } catch (const std::exception& e) {  // never let an exception escape the event handler: the work stays
+    spdlog::error("{}", e.what());
+    QMessageBox::warning(this, tr("Cannot import peaks"), QString::fromStdString(e.what()) + tr("\n\nNothing was changed."));
+    return false;
   }
   std::size_t count = 0;
   for (const auto& s : sets) count += s.peaks.size();

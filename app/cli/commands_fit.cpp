@@ -64,7 +64,9 @@ int runFit(const CommonOptions& o, const FitCommandOptions& f) {
     case OutputFormat::Json: std::cout << fitJson(project, result).dump(2) << '\n'; break;
     case OutputFormat::Csv: std::cout << fitAssignmentTable(project, result).toCsv(); break;
     case OutputFormat::Table:
-      std::cout << result.status << "\nchi2/dof = " << fixed(result.chi2PerDof, 3) << " (chi2 " << fixed(result.chi2, 2)
+      std::cout << result.status << "\nchi2/dof = "
+                << (std::isfinite(result.chi2PerDof) ? fixed(result.chi2PerDof, 3) : "— (undefined: no degrees of freedom)")
+                << " (chi2 " << fixed(result.chi2, 2)
                 << ", dof " << result.dof << "), " << result.assignedCount << " peaks assigned, " << result.outlierCount
                 << " left as outliers, " << result.ambiguousCount << " ambiguous (second-best line within cost margin 1)\n"
                 << result.errorNote << "\n";

@@ -6,6 +6,7 @@
 #include "core/common/error_location.h"
 #include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
 #include "core/project/field_semantics.h"
@@ -134,7 +135,14 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
     }
     return 0;
   }
-  const PlanResult result = finestra::runPlan(*model, request);
+  const PlanResult result = [&] {
+    try {
+      return finestra::runPlan(*model, request);
+    } catch (const InputError& e) {
+      if (!o.stepDeg || e.where() != "reach.step_deg") throw;
+      throw InputError("--step-deg", e.message());  // the user typed the option, not the key
+    }
+  }();
   print(planJson(*model, request, result), {planRegionTable(request, result), planBestTable(request, result)},
         common.format);
   return 0;

@@ -9,16 +9,18 @@
 #include <string_view>
 #include <vector>
 
+#include "core/common/limits.h"
+
 namespace finestra {
 
 /// Largest field magnitude (T) anywhere: reader, model, GUI widgets, CLI. Far beyond any laboratory
 /// magnet (the engine is tested to 30 T); past it the linear model means nothing and sums lose
 /// precision.
-inline constexpr double kMaxFieldT = 1000.0;
+inline constexpr double kMaxFieldT = limits::kMaxFieldT;
 /// Highest temperature (K) anywhere: sample conditions, temperature sweeps and scans, ZPL anchor.
 inline constexpr double kMaxTemperatureK = 1000.0;
-/// Largest absolute crystal strain component (dimensionless), same reasons as kMaxFieldT.
-inline constexpr double kMaxStrain = 1.0;
+/// Largest absolute crystal strain component (dimensionless); core/common/limits.h gives the physics.
+inline constexpr double kMaxStrain = limits::kMaxStrain;
 
 struct QuantitySpec {
   /// Project key path ("field.magnitude_T", "centre.parameters.lambda_g_GHz"; array elements without

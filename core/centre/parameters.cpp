@@ -83,6 +83,12 @@ int CentreParameters::nuclearDimension() const {
 }
 
 void CentreParameters::validateForComputation() const {
+  // The nuclear spin first: it decides which hyperfine values are required below.
+  if (known(Param::NuclearSpin)) {
+    const double twoI = 2.0 * get(Param::NuclearSpin);
+    if (twoI < 0 || std::abs(twoI - std::round(twoI)) > 1e-9 || twoI > 9)
+      throw InputError("nuclear_spin", "must be a multiple of 1/2 between 0 and 9/2");
+  }
   for (const ParamInfo& info : paramTable()) {
     if (info.hyperfine && !hasNuclearSpin() && info.id != Param::NuclearSpin) continue;
     if (isPhononParam(info.id)) continue;  // required by the thermal figures only
@@ -106,11 +112,6 @@ void CentreParameters::validateForComputation() const {
   nonNegative(Param::LambdaU);
   positive(Param::LifetimeNs);
   nonNegative(Param::DipoleRatio);
-  if (known(Param::NuclearSpin)) {
-    const double twoI = 2.0 * get(Param::NuclearSpin);
-    if (twoI < 0 || std::abs(twoI - std::round(twoI)) > 1e-9 || twoI > 9)
-      throw InputError("nuclear_spin", "must be a multiple of 1/2 between 0 and 9/2");
-  }
 }
 
 }  // namespace finestra

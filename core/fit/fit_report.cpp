@@ -36,6 +36,9 @@ ordered fitJson(const Project& project, const FitResult& r) {
   ordered doc;
   doc["converged"] = r.converged;
   doc["chi2_per_dof"] = number(r.chi2PerDof);
+  if (!std::isfinite(r.chi2PerDof))
+    doc["chi2_per_dof_undefined_reason"] = r.dof <= 0 ? "no degrees of freedom: as many free parameters as assigned peaks"
+                                                      : "chi2 is not finite";
   ordered parameters = ordered::array();
   for (const auto& p : r.parameters)
     parameters.push_back(ordered{{"name", p.name}, {"value", p.value}, {"stderr", number(p.standardError)}, {"free", p.free},

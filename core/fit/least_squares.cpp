@@ -109,6 +109,13 @@ UncertaintyAnalysis analyseUncertainty(const Eigen::MatrixXd& jac, double chi2, 
   out.scaledErrors = out.standardErrors;
   out.correlation = Eigen::MatrixXd::Constant(n, n, nan);
   if (n == 0) return out;
+  // A Jacobian that overflowed (weights of absurdly small uncertainties) determines nothing; the
+  // SVD below must never see a non-finite matrix.
+  if (!jac.allFinite() || !std::isfinite(chi2)) {
+    for (Eigen::Index k = 0; k < n; ++k) out.undetermined.push_back(static_cast<int>(k));
+    out.conditionNumber = std::numeric_limits<double>::infinity();
+    return out;
+  }
 
   // Normalise columns so that the threshold compares directions, not units.
   Eigen::VectorXd norms = jac.colwise().norm().transpose();

@@ -5,6 +5,7 @@
 #include <cmath>
 
 #include "core/common/errors.h"
+#include "core/common/text_escape.h"
 
 namespace finestra {
 namespace {
@@ -49,6 +50,22 @@ std::vector<std::string> splitCsvLine(const std::string& rawLine, const std::str
   if (quoted) throw InputError(where, "unterminated quote");
   cells.push_back(wasQuoted ? cell : trimmed(cell));
   return cells;
+}
+
+std::string_view csvTextWithoutByteOrderMark(const std::string& text, const std::string& origin) {
+  const std::string_view view(text);
+  if (view.starts_with("\xEF\xBB\xBF")) return view.substr(3);
+  if (view.starts_with("\xFF\xFE") || view.starts_with("\xFE\xFF"))
+    throw InputError(origin, "the file is UTF-16 (or UTF-32) text; save it as UTF-8");
+  return view;
+}
+
+void requireUtf8Row(const std::string& line, const std::string& where) {
+  const std::size_t bad = firstInvalidUtf8(line);
+  if (bad == std::string::npos) return;
+  throw InputError(where, "byte " + std::to_string(bad + 1) +
+                              " of this row is not UTF-8 text (the file looks like Latin-1 or Windows-1252); save "
+                              "the file as UTF-8");
 }
 
 bool isCsvCommentOrBlank(const std::string& line) {

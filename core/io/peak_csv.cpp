@@ -8,7 +8,9 @@
 #include <sstream>
 
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/csv_line.h"
+#include "core/io/measured_validity.h"
 #include "core/io/text_file.h"
 
 namespace finestra {
@@ -76,27 +78,40 @@ bool sameSetting(const MeasurementSet& a, const MeasurementSet& b) {
 }  // namespace
 
 std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::string& origin) {
-  std::istringstream in(text);
+  std::istringstream in(std::string(csvTextWithoutByteOrderMark(text, origin)));
   std::string line;
   int lineNumber = 0;
+  std::size_t headerCells = 0, peakRows = 0;
   std::optional<ColumnMap> header;
   std::vector<MeasurementSet> sets;
   std::map<std::string, std::size_t> setIndex;
   while (std::getline(in, line)) {
     ++lineNumber;
     const std::string where = origin + ":" + std::to_string(lineNumber);
+    requireUtf8Row(line, where);
     if (isCsvCommentOrBlank(line)) continue;
     const auto cells = splitCsvLine(line, where);
     if (!header) {
       header = readHeader(cells, where);
+      headerCells = cells.size();
       continue;
     }
+    // Empty trailing cells (a spreadsheet's trailing commas) carry nothing; a value there would be lost.
+    for (std::size_t extra = headerCells; extra < cells.size(); ++extra)
+      if (!cells[extra].empty())
+        throw InputError(where, std::to_string(cells.size()) + " cells, but the header has " + std::to_string(headerCells) +
+                                    " columns (a stray comma or an unquoted comma inside a name?)");
+    if (++peakRows > limits::kMaxPeakRows)
+      throw InputError(where, "more than " + std::to_string(limits::kMaxPeakRows) + " peak rows (the limit of a peaks file)");
     const RowReader row{cells, *header, where};
     MeasurementSet setting;
     setting.name = row.text(Name);
     if (setting.name.empty()) throw InputError(where, "measurement: name missing");
+    if (setting.name.size() > limits::kMaxNameBytes)
+      throw InputError(where, "measurement: name longer than " + std::to_string(limits::kMaxNameBytes) + " bytes");
     const double field = row.number(Field);
     if (field < 0) throw InputError(where, "field_T: must not be negative");
+    if (field > limits::kMaxFieldT) throw InputError(where, "field_T: too large for this model (at most 1000 T)");
     setting.field = FieldSetting::fromAngles(field, row.number(Polar), row.number(Azimuth));
     setting.temperatureK = row.optionalNumber(Temperature).value_or(4.0);
     if (setting.temperatureK < 0) throw InputError(where, "temperature_K: must not be negative");
@@ -107,10 +122,11 @@ std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::str
     peak.sigma = row.number(Sigma);
     if (!(peak.sigma > 0)) throw InputError(where, "sigma: must be positive");
     try {
-      toAbsoluteGHz(peak.position, peak.unit, 0.0);
+      checkMeasuredPosition(peak.position, peak.unit, "");
     } catch (const InputError& e) {
       throw InputError(where, "position: " + e.message());
     }
+    checkPeakSigma(peak.sigma, peak.position, peak.unit, where + ": sigma");
     if (const auto angle = row.optionalNumber(Analyser)) {
       const double a = *angle * std::numbers::pi / 180.0;
       peak.analyserLab = Vec3(std::cos(a), std::sin(a), 0.0);

@@ -5,7 +5,9 @@
 #include "core/centre/parameter_table.h"
 #include "core/common/error_location.h"
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/json_reader.h"
+#include "core/io/measured_validity.h"
 #include "core/io/project_file.h"
 #include "core/io/text_file.h"
 
@@ -62,6 +64,12 @@ SampleSetting readSample(const JsonObjectReader& r) {
   return {r.vec3("normal"), r.vec3("in_plane_x")};
 }
 
+// Names are copied into every row of a report: a stated limit keeps a pasted megabyte out.
+void requireNameLength(const std::string& name, const std::string& where) {
+  if (name.size() > limits::kMaxNameBytes)
+    throw InputError(where, "longer than " + std::to_string(limits::kMaxNameBytes) + " bytes");
+}
+
 // The field limit CentreModel enforces, checked here so that the message names the key and file.
 void requireFieldInRange(double magnitudeT, const std::string& where) {
   requireInRange(quantity("field.magnitude_T"), magnitudeT, where);
@@ -79,11 +87,17 @@ FieldSetting readField(const JsonObjectReader& r) {
     f.magnitudeT = checkedNumber(r, "magnitude_T", "field.magnitude_T");
     f.polarDeg = checkedNumber(r, "polar_deg", "field.polar_deg", 0.0);
     f.azimuthDeg = checkedNumber(r, "azimuth_deg", "field.azimuth_deg", 0.0);
-  } else if (r.has("vector_lab_T")) {
+  } else {
+    // Angles belong to magnitude_T only; next to a vector they would be silently ignored.
+    for (const char* angle : {"polar_deg", "azimuth_deg"})
+      if (r.has(angle))
+        throw InputError(r.keyPath(angle), "is used only with magnitude_T; the field here is given as a vector");
+  }
+  if (r.has("vector_lab_T")) {
     f.form = FieldSetting::Form::VectorLab;
     f.vector = r.vec3("vector_lab_T");
     requireFieldInRange(f.vector.norm(), r.keyPath("vector_lab_T"));
-  } else {
+  } else if (r.has("vector_crystal_T")) {
     f.form = FieldSetting::Form::VectorCrystal;
     f.vector = r.vec3("vector_crystal_T");
     requireFieldInRange(f.vector.norm(), r.keyPath("vector_crystal_T"));
@@ -154,6 +168,7 @@ SweepSpec readSweep(const JsonObjectReader& r) {
   r.allowOnly({"name", "kind", "from", "to", "points", "plane_normal_lab", "start_lab", "strain_to"});
   SweepSpec s;
   s.name = r.string("name", "");
+  requireNameLength(s.name, r.keyPath("name"));
   const std::string kind = r.string("kind");
   if (kind == "magnitude") s.kind = SweepKind::Magnitude;
   else if (kind == "angle") s.kind = SweepKind::Angle;
@@ -192,12 +207,12 @@ MeasuredPeak readPeak(const JsonObjectReader& r) {
   p.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
   p.position = r.number("position");
   try {
-    (void)toAbsoluteGHz(p.position, p.unit, 1.0);
+    checkMeasuredPosition(p.position, p.unit, "");
   } catch (const InputError& e) {
     throw InputError(r.keyPath("position"), e.message());
   }
   p.sigma = r.number("sigma");
-  if (p.sigma <= 0) throw InputError(r.keyPath("sigma"), "uncertainty must be positive");
+  checkPeakSigma(p.sigma, p.position, p.unit, r.keyPath("sigma"));
   p.analyserLab = r.optionalVec3("analyser_lab");
   if (p.analyserLab && p.analyserLab->norm() < 1e-12) throw InputError(r.keyPath("analyser_lab"), "vector is zero");
   if (!r.isNull("assign")) {
@@ -216,6 +231,7 @@ MeasurementSet readMeasurement(const JsonObjectReader& r) {
   r.allowOnly({"name", "temperature_K", "field", "peaks"});
   MeasurementSet m;
   m.name = r.string("name", "");
+  requireNameLength(m.name, r.keyPath("name"));
   m.temperatureK = checkedNumber(r, "temperature_K", "conditions.temperature_K", m.temperatureK);
   m.field = readField(r.object("field"));
   const json& peaks = r.raw("peaks");
@@ -263,6 +279,7 @@ MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
   r.allowOnly({"name", "unit", "position", "signal"});
   MeasuredSpectrum m;
   m.name = r.string("name", "");
+  requireNameLength(m.name, r.keyPath("name"));
   m.unit = parseSpectralUnit(r.string("unit"), r.keyPath("unit"));
   m.position = readNumbers(r.raw("position"), r.keyPath("position"));
   m.signal = readNumbers(r.raw("signal"), r.keyPath("signal"));
@@ -270,6 +287,8 @@ MeasuredSpectrum readMeasuredSpectrum(const JsonObjectReader& r) {
     throw InputError(r.keyPath("signal"), "has " + std::to_string(m.signal.size()) + " values but position has " +
                                               std::to_string(m.position.size()));
   if (m.position.size() < 2) throw InputError(r.keyPath("position"), "needs at least two points");
+  for (std::size_t i = 0; i < m.position.size(); ++i)
+    checkMeasuredPosition(m.position[i], m.unit, r.keyPath("position") + "[" + std::to_string(i) + "]");
   return m;
 }
 

@@ -4,6 +4,7 @@
 
 #include "core/common/errors.h"
 #include "core/io/csv_line.h"
+#include "core/io/measured_validity.h"
 #include "core/io/text_file.h"
 
 namespace finestra {
@@ -27,13 +28,14 @@ MeasuredSpectrum parseSpectrumCsv(const std::string& text, const std::string& or
   MeasuredSpectrum out;
   out.name = baseName(origin);
   std::optional<SpectralUnit> unit = chosenUnit;
-  std::istringstream in(text);
+  std::istringstream in(std::string(csvTextWithoutByteOrderMark(text, origin)));
   std::string line;
   int lineNumber = 0;
   bool firstContentLine = true;
   while (std::getline(in, line)) {
     ++lineNumber;
     const std::string where = origin + ":" + std::to_string(lineNumber);
+    requireUtf8Row(line, where);
     if (isCsvCommentOrBlank(line)) continue;
     const auto cells = splitCsvLine(line, where);
     if (cells.size() != 2)
@@ -59,6 +61,7 @@ MeasuredSpectrum parseSpectrumCsv(const std::string& text, const std::string& or
     if (!unit) throw SpectrumUnitMissingError(where, "the file has no header naming the unit and no unit was chosen on import");
     if (*unit != SpectralUnit::GHzDetuning && *x <= 0)
       throw InputError(where, "position must be positive on " + std::string(spectralUnitKey(*unit)));
+    checkMeasuredPosition(*x, *unit, where + ": position");
     out.position.push_back(*x);
     out.signal.push_back(*y);
   }

@@ -7,6 +7,7 @@
 
 #include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/model/dipole.h"
 #include "core/model/tracking.h"
 #include "core/units/linewidth.h"
@@ -40,7 +41,7 @@ std::string shortNumber(double x) {
 void validateStrain(const StrainSetting& s) {
   if (!s.crystal.allFinite()) throw InputError("strain.crystal", "component is not a finite number");
   if (s.crystal.cwiseAbs().maxCoeff() > kMaxStrain)
-    throw InputError("strain.crystal", "component above 1 (100 % strain) is outside the model");
+    throw InputError("strain.crystal", "component above 0.05 (5 % strain) is outside the model");
   if ((s.crystal - s.crystal.transpose()).cwiseAbs().maxCoeff() > 1e-15)
     throw InputError("strain.crystal", "tensor must be symmetric");
   for (const EgStrain* e : {&s.extraGround, &s.extraExcited})
@@ -101,7 +102,7 @@ ManifoldEigen CentreModel::levels(Manifold m, int cls, const Vec3& fieldCrystal,
     throw InputError("field", "magnitude " + shortNumber(fieldCrystal.norm()) +
                                   " T is too large for this model (at most " + shortNumber(kMaxFieldT) + " T)");
   if (strainOverride && !(strainOverride->cwiseAbs().maxCoeff() <= kMaxStrain))
-    throw InputError("strain", "a strain component is not finite or above 1 (100 % strain)");
+    throw InputError("strain", "a strain component is not finite or above 0.05 (5 % strain)");
   ManifoldEigen out = diagonalise(manifold(m), strainFor(m, cls, strainOverride), defectFrame(cls) * fieldCrystal);
   if (!out.energies.allFinite() || !out.vectors.allFinite())
     throw InputError("centre.parameters", "the computation gave non-finite energies (a value is far too large)");

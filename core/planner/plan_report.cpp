@@ -14,8 +14,11 @@ using json = nlohmann::ordered_json;
 json number(double v) { return std::isfinite(v) ? json(v) : json(nullptr); }
 json vec(const Vec3& v) { return json::array({v.x(), v.y(), v.z()}); }
 
+// Undefined figures print as a dash in tables and CSV, never as "nan".
+std::string exactOrDash(double v) { return std::isnan(v) ? "—" : exact(v); }
+
 std::string cell(double v, int decimals) {
-  if (std::isnan(v)) return "-";
+  if (std::isnan(v)) return "—";
   if (std::isinf(v)) return v > 0 ? "inf" : "-inf";
   return fixed(v, decimals);
 }
@@ -50,20 +53,41 @@ std::string vecCell(const Vec3& v, int decimals) {
   return buf;
 }
 
-}  // namespace
-
-json figuresJson(const ClassFigures& f) {
-  return {{"qubit_GHz", f.qubitGHz},
+json figuresValuesJson(const ClassFigures& f) {
+  return {{"qubit_GHz", number(f.qubitGHz)},
           {"drive_GHz_per_T", number(f.driveGHzPerT)},
           {"drive_fraction", number(f.driveFraction)},
           {"cyclicity", number(f.cyclicity)},
           {"cyclicity_capped", f.cyclicity >= kCyclicityCap},
           {"separation_linewidths", number(f.separationLinewidths)},
-          {"ground_gap_GHz", f.groundGapGHz},
-          {"ground_gap_at_T", f.groundGapFieldT},
-          {"excited_gap_GHz", f.excitedGapGHz},
-          {"excited_gap_at_T", f.excitedGapFieldT},
-          {"axis_angle_deg", f.axisAngleDeg}};
+          {"ground_gap_GHz", number(f.groundGapGHz)},
+          {"ground_gap_at_T", number(f.groundGapFieldT)},
+          {"excited_gap_GHz", number(f.excitedGapGHz)},
+          {"excited_gap_at_T", number(f.excitedGapFieldT)},
+          {"axis_angle_deg", number(f.axisAngleDeg)}};
+}
+
+// Why figures of one class are undefined at this point ("" when all are defined). The drive and
+// the cyclicity refer to a pair of levels; where that pair is degenerate (zero field, or a field
+// perpendicular to the class axis where the spin sectors cross) no transition is singled out.
+std::string undefinedReason(const ClassFigures& f) {
+  std::string reason;
+  auto add = [&](const char* text) { reason += (reason.empty() ? "" : "; ") + std::string(text); };
+  if (std::isnan(f.axisAngleDeg)) add("axis_angle_deg: no field direction at zero field");
+  if (std::isnan(f.driveGHzPerT) || std::isnan(f.driveFraction))
+    add("drive: the two lowest ground levels are degenerate (zero field or a field perpendicular to the class axis)");
+  if (std::isnan(f.cyclicity)) add("cyclicity: the chosen levels are degenerate, no spin-conserving line is singled out");
+  if (std::isnan(f.qubitGHz) || std::isnan(f.separationLinewidths) || std::isnan(f.groundGapGHz) || std::isnan(f.excitedGapGHz))
+    add("a level splitting is not defined at this point");
+  return reason;
+}
+
+}  // namespace
+
+json figuresJson(const ClassFigures& f) {
+  json out = figuresValuesJson(f);
+  if (const std::string reason = undefinedReason(f); !reason.empty()) out["undefined_reason"] = reason;
+  return out;
 }
 
 json spinTransitionsJson(const std::vector<SpinTransition>& transitions) {
@@ -199,7 +223,7 @@ Table mapTable(const PlannerSettings& settings, const FigureMap& map) {
       for (int cls : settings.classes) {
         const ClassFigures& f = map.at(i, j, cls);
         std::vector<std::string> row{exact(map.grid.polarDeg(i)), exact(map.grid.azimuthDeg(j)), std::to_string(cls)};
-        for (const auto& info : figureTable()) row.push_back(exact(figureValue(f, info.id)));
+        for (const auto& info : figureTable()) row.push_back(exactOrDash(figureValue(f, info.id)));
         t.rows.push_back(std::move(row));
       }
   return t;
@@ -212,7 +236,7 @@ Table profileTable(const PlannerSettings& settings, const std::vector<ProfilePoi
   for (const auto& p : profile)
     for (int cls : settings.classes) {
       std::vector<std::string> row{exact(p.magnitudeT), std::to_string(cls)};
-      for (const auto& info : figureTable()) row.push_back(exact(figureValue(p.figures[static_cast<std::size_t>(cls)], info.id)));
+      for (const auto& info : figureTable()) row.push_back(exactOrDash(figureValue(p.figures[static_cast<std::size_t>(cls)], info.id)));
       t.rows.push_back(std::move(row));
     }
   return t;

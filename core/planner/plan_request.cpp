@@ -5,6 +5,7 @@
 
 #include "core/common/error_location.h"
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/io/json_reader.h"
 #include "core/io/text_file.h"
 
@@ -110,6 +111,8 @@ PlanRequest parsePlanRequest(const std::string& text, const std::string& origin,
     }
     request.bestCount = r.integer("best", request.bestCount);
     request.settings.gapScanSamples = r.integer("gap_scan_samples", request.settings.gapScanSamples);
+    if (request.settings.gapScanSamples < 2 || request.settings.gapScanSamples > limits::kMaxGapScanSamples)
+      throw InputError("gap_scan_samples", "must be between 2 and " + std::to_string(limits::kMaxGapScanSamples));
   } catch (const InputError& e) {
     throw locatedIn(e, origin);
   }

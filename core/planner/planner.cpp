@@ -7,6 +7,7 @@
 
 #include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
+#include "core/common/limits.h"
 #include "core/common/parallel.h"
 #include "core/project/field_semantics.h"
 
@@ -78,6 +79,12 @@ bool Constraint::holds(const ClassFigures& f) const {
 
 std::vector<ReachableDirection> reachableDirections(const MagnetReach& reach) {
   requireInRange(quantity("planner.step_deg"), reach.stepDeg, "reach.step_deg");
+  // Count before allocating: a tiny step would otherwise overflow the int counts or exhaust memory.
+  const double sphereDirections = (180.0 / reach.stepDeg) * (360.0 / reach.stepDeg);
+  const double directions = reach.kind == ReachKind::Sphere ? sphereDirections : 360.0 / reach.stepDeg;
+  if (!(directions <= static_cast<double>(limits::kMaxPlannerDirections)))
+    throw InputError("reach.step_deg", "too small: more than " + std::to_string(limits::kMaxPlannerDirections) +
+                                           " directions (the limit of one plan; a sphere needs a step of at least 0.25 degrees)");
   std::vector<ReachableDirection> out;
   if (reach.kind == ReachKind::Sphere) {
     const int rows = stepsIn(180.0, reach.stepDeg);

@@ -5,17 +5,27 @@
 #include <sstream>
 
 namespace finestra {
+namespace {
+
+// Columns a cell takes on a terminal: one per UTF-8 code point ("—", "°" and "ε" are one column).
+std::size_t displayWidth(const std::string& text) {
+  return static_cast<std::size_t>(std::count_if(text.begin(), text.end(), [](char c) {
+    return (static_cast<unsigned char>(c) & 0xC0u) != 0x80u;
+  }));
+}
+
+}  // namespace
 
 std::string Table::toText() const {
   std::vector<std::size_t> width(headers.size(), 0);
-  for (std::size_t c = 0; c < headers.size(); ++c) width[c] = headers[c].size();
+  for (std::size_t c = 0; c < headers.size(); ++c) width[c] = displayWidth(headers[c]);
   for (const auto& r : rows)
-    for (std::size_t c = 0; c < r.size() && c < width.size(); ++c) width[c] = std::max(width[c], r[c].size());
+    for (std::size_t c = 0; c < r.size() && c < width.size(); ++c) width[c] = std::max(width[c], displayWidth(r[c]));
   std::ostringstream out;
   auto line = [&](const std::vector<std::string>& cells) {
     for (std::size_t c = 0; c < cells.size(); ++c) {
       if (c) out << "  ";
-      out << std::string(width[c] - std::min(width[c], cells[c].size()), ' ') << cells[c];
+      out << std::string(width[c] - std::min(width[c], displayWidth(cells[c])), ' ') << cells[c];
     }
     out << '\n';
   };

@@ -119,3 +119,28 @@ TEST(BadInputCli, EveryOutputFormatOfAGoodProjectIsFinite) {
       }
     }
 }
+
+// ---- Second hardening pass: undefined figures and echoed control characters ------------------
+
+TEST(BadInputCli, PlannerProfileThroughZeroFieldReportsUndefinedFiguresWithAReason) {
+  // The profile starts at 0 T, where no field direction exists and the spin levels are degenerate.
+  for (const char* format : {"json", "table", "csv"}) {
+    SCOPED_TRACE(format);
+    const RunResult r = runCli({"plan", kExample.string(), "--what", "profile", "--points", "3", "--format", format});
+    ASSERT_TRUE(r.exited && r.exitCode == 0) << r.err;
+    std::string lower = r.out;
+    for (auto& c : lower) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    EXPECT_EQ(lower.find("nan"), std::string::npos) << r.out;
+    if (std::string(format) == "json") {
+      EXPECT_NE(r.out.find("\"undefined_reason\""), std::string::npos) << r.out;
+    }
+  }
+}
+
+TEST(BadInputCli, ControlCharactersFromTheInputNeverReachTheTerminal) {
+  const RunResult r = runCli({"levels", (kDataDir / "bad" / "escape_character_in_key.json").string()});
+  ASSERT_TRUE(r.exited);
+  EXPECT_EQ(r.exitCode, 2);
+  EXPECT_EQ(r.err.find('\x1b'), std::string::npos) << "raw ESC on stderr";
+  EXPECT_NE(r.err.find("descr\\e[31miption"), std::string::npos) << r.err;
+}

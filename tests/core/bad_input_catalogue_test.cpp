@@ -12,12 +12,18 @@
 
 #include "core/common/errors.h"
 #include "core/crystal/frames.h"
+#include "core/common/text_escape.h"
+#include "core/fit/fit_report.h"
+#include "core/fit/least_squares.h"
 #include "core/io/json_reader.h"
+#include "core/io/peak_csv.h"
+#include "core/io/spectrum_csv.h"
 #include "core/io/project_file.h"
 #include "core/io/text_file.h"
 #include "core/project/model_setup.h"
 #include "core/project/evaluate.h"
 #include "core/optics/spectrum.h"
+#include "core/report/table.h"
 #include "core/units/spectral_units.h"
 
 using namespace finestra;
@@ -195,4 +201,105 @@ TEST(BadParameterValues, SaveToAnImpossiblePlaceNamesThePath) {
   const std::string missingFolder = (dir / "no" / "such" / "folder" / "p.json").string();
   expectMessage(messageOf([&] { writeFileAtomically(missingFolder, "{}"); }), {"no/such/folder/p.json", "cannot write"});
   fs::remove_all(dir);
+}
+
+// ---- Text encodings, control characters, measured values (second hardening pass) -------------
+
+namespace {
+const std::string kPeakHeader = "measurement,field_T,polar_deg,azimuth_deg,position,unit,sigma\n";
+}  // namespace
+
+TEST(BadTextInput, PeakCsvWithByteOrderMarkAndWindowsLineEndsIsRead) {
+  const std::string text = "\xEF\xBB\xBF" + std::string("measurement,field_T,polar_deg,azimuth_deg,position,unit,sigma\r\n") +
+                           "a,0.5,0,0,406.7,THz,0.0001\r\n";
+  const auto sets = parsePeakCsv(text, "bom.csv");
+  ASSERT_EQ(sets.size(), 1u);
+  EXPECT_EQ(sets[0].name, "a");
+  EXPECT_EQ(sets[0].peaks.size(), 1u);
+}
+
+TEST(BadTextInput, Latin1PeakCsvIsRefusedNamingTheRowAndAskingForUtf8) {
+  const std::string text = kPeakHeader + "a,0.5,0,0,406.7,THz,0.0001\n" + "mesure \xE9t\xE9,0.5,0,0,406.7,THz,0.0001\n";
+  const std::string m = messageOf([&] { parsePeakCsv(text, "latin1.csv"); });
+  expectMessage(m, {"latin1.csv:3", "save the file as UTF-8"});
+  EXPECT_EQ(firstInvalidUtf8(m), std::string::npos) << "the message itself must be valid UTF-8";
+}
+
+TEST(BadTextInput, Latin1SpectrumCsvIsRefusedNamingTheRow) {
+  expectMessage(messageOf([] { parseSpectrumCsv("THz,signal \xB5W\n406.7,1\n406.8,2\n", "latin1_spectrum.csv", std::nullopt); }),
+                {"latin1_spectrum.csv:1", "save the file as UTF-8"});
+}
+
+TEST(BadTextInput, Utf16CsvIsRefusedAskingForUtf8) {
+  expectMessage(messageOf([] { parsePeakCsv(std::string("\xFF\xFEm\0e\0", 6), "utf16.csv"); }), {"utf16.csv", "UTF-16", "save it as UTF-8"});
+}
+
+TEST(BadTextInput, ExtraCsvCellsAreRefusedNamingTheRow) {
+  const std::string text = kPeakHeader + "a,0.5,0,0,406.7,THz,0.0001,17\n";
+  expectMessage(messageOf([&] { parsePeakCsv(text, "extra.csv"); }), {"extra.csv:2", "8 cells", "7 columns"});
+}
+
+TEST(BadTextInput, OverlongMeasurementNameIsRefused) {
+  const std::string text = kPeakHeader + std::string(100000, 'x') + ",0.5,0,0,406.7,THz,0.0001\n";
+  expectMessage(messageOf([&] { parsePeakCsv(text, "long.csv"); }), {"long.csv:2", "name longer than 256 bytes"});
+}
+
+TEST(BadTextInput, ControlCharactersAreEscapedInEveryMessage) {
+  const InputError e("key\x1b[31m", std::string("bell\x07, nul ") + '\0' + ", C1 \xC2\x9B, bad \xFF, mark \xEF\xBB\xBF, line\nbreak");
+  const std::string m = e.what();
+  EXPECT_EQ(m, "key\\e[31m: bell\\x07, nul \\x00, C1 \\u009B, bad \\xFF, mark \\uFEFF, line\nbreak");
+  EXPECT_EQ(escapeControlCharacters(m), m) << "escaping twice changes nothing";
+  EXPECT_EQ(escapeControlCharacters("caf\xC3\xA9 \xCE\xBB"), "caf\xC3\xA9 \xCE\xBB") << "printable UTF-8 is kept";
+}
+
+TEST(BadTextInput, HugeOrTinyPeakValuesAreRefusedAtRead) {
+  expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,0.5,0,0,1e308,GHz,0.1\n", "huge.csv"); }),
+                {"huge.csv:2", "position", "not an optical position"});
+  expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,0.5,0,0,406.7,THz,1e-160\n", "tiny.csv"); }),
+                {"tiny.csv:2: sigma", "below the smallest accepted"});
+  expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,0.5,0,0,1e9,GHz_detuning,0.1\n", "far.csv"); }),
+                {"far.csv:2", "too far from the ZPL"});
+}
+
+TEST(BadTextInput, OverflowingFitJacobianLeavesEveryParameterUndetermined) {
+  Eigen::MatrixXd jac(4, 2);
+  jac << 1, 2, 3, 4, 5, 6, std::numeric_limits<double>::infinity(), 1;
+  const UncertaintyAnalysis a = analyseUncertainty(jac, 1e300, 1e-10);
+  EXPECT_EQ(a.undetermined.size(), 2u);
+  EXPECT_TRUE(std::isnan(a.standardErrors[0]));
+}
+
+TEST(BadTextInput, InputFileLargerThanTheLimitStopsWithAMessage) {
+  expectMessage(messageOf([] { readTextFile("/dev/zero"); }), {"/dev/zero", "larger than the limit of 16 MiB"});
+}
+
+TEST(BadTextInput, FitWithoutDegreesOfFreedomReportsChiSquarePerDofAsUndefinedWithAReason) {
+  FitResult r;
+  r.dof = 0;
+  r.chi2PerDof = std::numeric_limits<double>::quiet_NaN();
+  const auto doc = fitJson(goodProject(), r);
+  EXPECT_TRUE(doc.at("chi2_per_dof").is_null());
+  EXPECT_NE(doc.at("chi2_per_dof_undefined_reason").get<std::string>().find("no degrees of freedom"), std::string::npos);
+}
+
+TEST(BadTextInput, StrainOfFivePercentIsTheStatedLimit) {
+  Project p = goodProject();
+  p.strain.crystal(2, 2) = 0.05;
+  EXPECT_NO_THROW(CentreModel m(makeModelSetup(p)));
+  p.strain.crystal(2, 2) = 0.5;
+  expectMessage(messageOf([&] { CentreModel m(makeModelSetup(p)); }), {"strain.crystal", "0.05", "outside the model"});
+}
+
+TEST(BadTextInput, PeakCsvFieldBeyondWhatAProjectAcceptsIsRefusedAtImport) {
+  // What the import accepts, the project reader must open again: both stop at 1000 T.
+  expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,5000,0,0,406.7,THz,0.0001\n", "strong.csv"); }),
+                {"strong.csv:2", "field_T", "at most 1000 T"});
+}
+
+TEST(BadTextInput, UndefinedCellsKeepTableColumnsAligned) {
+  const Table t{{"value", "next"}, {{"—", "x"}, {"12345", "y"}}};
+  const std::string text = t.toText();
+  // Every line has the "next" column at the same terminal column: "—" counts as one.
+  EXPECT_NE(text.find("    —     x\n"), std::string::npos) << text;
+  EXPECT_NE(text.find("12345     y\n"), std::string::npos) << text;
 }
