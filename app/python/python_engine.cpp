@@ -21,7 +21,7 @@ namespace {
 
 /// Largest number of fields one line_grid call accepts (the output is 512 bytes per field and class).
 constexpr py::ssize_t kMaxGridFields = 2'000'000;
-/// The project reader's field limit (docs/physics.md, the model's validity range).
+/// The project reader's field limit (docs/physics.md, Accepted ranges).
 constexpr double kMaxFieldT = 1000.0;
 
 std::vector<Vec3> fieldsFrom(const py::array_t<double, py::array::c_style | py::array::forcecast>& fields) {

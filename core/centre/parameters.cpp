@@ -72,8 +72,9 @@ double CentreParameters::require(Param p) const {
   if (!std::isfinite(v))
     throw MissingValueError(std::string(paramInfo(p).key),
                             std::string(paramInfo(p).meaning) +
-                                " is unknown for this centre: set it in the Setup panel, Centre parameter table, row '" +
-                                std::string(paramInfo(p).key) + "', or mark an assumed value there");
+                                " is unknown for this centre: give it in the project file as centre.parameters." +
+                                std::string(paramInfo(p).key) + " (or centre.assumed." + std::string(paramInfo(p).key) +
+                                " for an assumed value), or set it in the Setup panel's centre parameter table");
   return v;
 }
 

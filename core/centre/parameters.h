@@ -19,7 +19,7 @@ enum class Param : int {
   TperpG, TparG, DG, FG, TperpU, TparU, DU, FU,
   DipoleRatio, LifetimeNs,
   AParG, APerpG, AParU, APerpU, NuclearSpin, GammaN,
-  // Phonon model (docs/physics.md, Phonons): needed only by rates, linewidths and sidebands.
+  // Phonon model (docs/physics.md, Phonons and linewidths): needed only by rates, linewidths and sidebands.
   PhononChiG, PhononChiU, HigherOrderCoefG, HigherOrderPowerG, HigherOrderCoefU, HigherOrderPowerU,
   ZplShiftCoef, ZplShiftPower, DebyeWaller, SidebandShiftMeV, SidebandFwhmMeV,
   Count

@@ -66,7 +66,7 @@ CentreModel::CentreModel(ModelSetup setup) : setup_(std::move(setup)) {
   ground_ = manifoldModel(p, Manifold::Ground);
   excited_ = manifoldModel(p, Manifold::Excited);
   zplGHz_ = p.get(Param::ZplTHz) * 1e3;
-  // Optional thermal ZPL shift c (T / 1 K)^p (docs/physics.md, Phonons); inactive when unknown.
+  // Optional thermal ZPL shift c (T / 1 K)^p (docs/physics.md, Phonons and linewidths); inactive when unknown.
   if (p.known(Param::ZplShiftCoef) && p.known(Param::ZplShiftPower) && setup_.conditions.temperatureK > 0)
     thermalShiftGHz_ = p.get(Param::ZplShiftCoef) * std::pow(setup_.conditions.temperatureK, p.get(Param::ZplShiftPower));
   if (!std::isfinite(thermalShiftGHz_) || std::abs(thermalShiftGHz_) > 1e6)

@@ -1,5 +1,5 @@
 #pragma once
-// Anchoring the ZPL to a line the user knows (docs/physics.md, Presets: what the ZPL value means).
+// Anchoring the ZPL to a line the user knows (docs/physics.md, Anchoring the ZPL).
 // The engine's ZPL parameter is the centroid of the four zero-field lines of the unstrained centre;
 // trade values are usually the wavelength of one bright line at a stated temperature. Given
 // "line X at T = λ", the centroid is solved so that line X of the unstrained centre at zero field

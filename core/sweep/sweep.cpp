@@ -37,7 +37,7 @@ struct ManifoldTrack {
 };
 
 /// Levels of one class along a field sweep. Without an isotope and with the strain fixed, both
-/// manifolds are linear in B (docs/physics.md, Hamiltonian): sampled once, then diagonalised per
+/// manifolds are linear in B (docs/physics.md, Hamiltonian of one manifold): sampled once, then diagonalised per
 /// point in closed form (core/hamiltonian/linear4.h, solver fallback at degeneracies) instead of
 /// rebuilding and diagonalising the general Hamiltonian. Otherwise CentreModel::levels.
 class SweepLevels {

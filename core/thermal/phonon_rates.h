@@ -1,6 +1,6 @@
 #pragma once
 // Phonon-driven transitions between the two orbital branches of one manifold (docs/physics.md,
-// Phonons). First-order (single-phonon) process in the form of Jahnke et al., New J. Phys. 17,
+// Phonons and linewidths). First-order (single-phonon) process in the form of Jahnke et al., New J. Phys. 17,
 // 043011 (2015): downward rate χ Δ³ (n(Δ,T) + 1), upward rate χ Δ³ n(Δ,T), with n the
 // Bose–Einstein occupation of a phonon of energy hΔ. An optional higher-order term c (T / 1 K)^p
 // is added to both directions.

@@ -45,8 +45,8 @@ TEST(ThermalRates, HighTemperatureLimitIsLinearInT) {
 }
 
 TEST(ThermalRates, DownwardRateScalesAsSplittingCubedUnderStrain) {
-  // E-type strain ε raises the ground splitting to Δ = sqrt(λ² + 4ε²) (docs/physics.md, strain
-  // from the four zero-field lines; exact algebra of the model); the spontaneous (T = 0) rate
+  // E-type strain ε raises the ground splitting to Δ = sqrt(λ² + 4ε²) (docs/physics.md, Strain
+  // from the zero-field lines; exact algebra of the model); the spontaneous (T = 0) rate
   // then grows as Δ³ (Jahnke et al. 2015).
   ModelSetup plain = setupFor("SiV-");
   ModelSetup strained = plain;
