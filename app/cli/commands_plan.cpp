@@ -84,7 +84,7 @@ void addPlanOptions(CLI::App* cmd, PlanOptions& o) {
   cmd->add_option("--direction-lab", o.directionLab, "profile: true field direction in the lab, x,y,z (default: the project's true field)")->delimiter(',');
   cmd->add_option("--max-T", o.maxT, "profile: largest magnitude (default: the first magnitude)");
   cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(quantity("planner.profile_points").minimum, quantity("planner.profile_points").maximum));
-  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(quantity("planner.step_deg").minimum, quantity("planner.step_deg").maximum));
+  cmd->add_option("--map-step-deg", o.mapStepDeg, "map: grid step in polar and azimuth of the true field (deg)")->check(CLI::Range(limits::kMinMapStepDeg, quantity("planner.step_deg").maximum));
 }
 
 int runPlan(const CommonOptions& common, const PlanOptions& o) {

@@ -7,6 +7,7 @@
 #include <optional>
 #include <sstream>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/common/limits.h"
 #include "core/io/csv_line.h"
@@ -109,12 +110,16 @@ std::vector<MeasurementSet> parsePeakCsv(const std::string& text, const std::str
     if (setting.name.empty()) throw InputError(where, "measurement: name missing");
     if (setting.name.size() > limits::kMaxNameBytes)
       throw InputError(where, "measurement: name longer than " + std::to_string(limits::kMaxNameBytes) + " bytes");
+    // The project reader's ranges (core/centre/parameter_table.h): what is imported can be saved
+    // and opened again.
     const double field = row.number(Field);
-    if (field < 0) throw InputError(where, "field_T: must not be negative");
-    if (field > limits::kMaxFieldT) throw InputError(where, "field_T: too large for this model (at most 1000 T)");
-    setting.field = FieldSetting::fromAngles(field, row.number(Polar), row.number(Azimuth));
+    requireInRange(quantity("field.magnitude_T"), field, where + ": field_T");
+    const double polar = row.number(Polar), azimuth = row.number(Azimuth);
+    requireInRange(quantity("field.polar_deg"), polar, where + ": polar_deg");
+    requireInRange(quantity("field.azimuth_deg"), azimuth, where + ": azimuth_deg");
+    setting.field = FieldSetting::fromAngles(field, polar, azimuth);
     setting.temperatureK = row.optionalNumber(Temperature).value_or(4.0);
-    if (setting.temperatureK < 0) throw InputError(where, "temperature_K: must not be negative");
+    requireInRange(quantity("conditions.temperature_K"), setting.temperatureK, where + ": temperature_K");
 
     MeasuredPeak peak;
     peak.position = row.number(Position);

@@ -89,7 +89,9 @@ std::array<double, 2> autoRange(const CentreModel& model, const std::vector<Weig
     const SidebandShape shape = sidebandShape(model.setup().centre.parameters);
     lo = std::min(lo, model.zplGHz() - shape.shiftGHz - 2.0 * shape.fwhmGHz);
   }
-  const double margin = std::max(5.0, 10.0 * widest) + 0.05 * (hi - lo);
+  // At extreme strain the phonon widths (∝ Δ³) can exceed the optical frequency itself; the
+  // margin stays below half the lowest frequency so that every unit of the axis is defined.
+  const double margin = std::min(std::max(5.0, 10.0 * widest) + 0.05 * (hi - lo), 0.5 * lo);
   double a = fromAbsoluteGHz(lo - margin, unit, model.zplGHz());
   double b = fromAbsoluteGHz(hi + margin, unit, model.zplGHz());
   if (a > b) std::swap(a, b);

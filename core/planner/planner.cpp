@@ -254,6 +254,9 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
 FigureMap computeFigureMap(const CentreModel& model, const PlannerSettings& settings, const SphereGrid& grid,
                            const ProgressControl& progress, int threads) {
   if (grid.polarCount < 2 || grid.azimuthCount < 2) throw InputError("map", "grid needs at least 2 x 2 points");
+  if (static_cast<double>(grid.polarCount) * grid.azimuthCount > static_cast<double>(limits::kMaxMapCells))
+    throw InputError("map", "more than " + std::to_string(limits::kMaxMapCells) +
+                                " cells (the limit of one map; a full sphere needs a step of at least 0.25 degrees)");
   FigureMap map;
   map.grid = grid;
   map.magnitudeT = settings.magnitudeT;

@@ -1,6 +1,6 @@
 #pragma once
 // Magnetic-dipole (microwave) transitions between the levels of one manifold of one orientation
-// class, with the isotope's nuclear spin resolved (docs/physics.md, Hamiltonian of one manifold, and Hyperfine).
+// class, with the isotope's nuclear spin resolved (docs/physics.md, Hyperfine; docs/physics.md, Hamiltonian of one manifold).
 #include <vector>
 
 #include "core/model/centre_model.h"

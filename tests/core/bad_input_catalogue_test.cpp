@@ -293,7 +293,7 @@ TEST(BadTextInput, StrainOfFivePercentIsTheStatedLimit) {
 TEST(BadTextInput, PeakCsvFieldBeyondWhatAProjectAcceptsIsRefusedAtImport) {
   // What the import accepts, the project reader must open again: both stop at 1000 T.
   expectMessage(messageOf([] { parsePeakCsv(kPeakHeader + "a,5000,0,0,406.7,THz,0.0001\n", "strong.csv"); }),
-                {"strong.csv:2", "field_T", "at most 1000 T"});
+                {"strong.csv:2", "field_T", "0 … 1000 T"});
 }
 
 TEST(BadTextInput, UndefinedCellsKeepTableColumnsAligned) {

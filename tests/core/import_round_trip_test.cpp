@@ -30,7 +30,7 @@ TEST(ImportRoundTrip, ValuesAtTheImportLimitsOpenAgainAfterSaving) {
   const std::string longName(limits::kMaxNameBytes, 'n');
   const std::string peaks =
       "\xEF\xBB\xBFmeasurement,field_T,polar_deg,azimuth_deg,position,unit,sigma,analyser_deg,temperature_K\r\n"
-      "caf\xC3\xA9 set,1000,180,-720,406.7,THz,1.01e-9,45,0\r\n" +        // strongest field, smallest sigma
+      "caf\xC3\xA9 set,1000,180,-360,406.7,THz,1.01e-9,45,0\r\n" +        // strongest field, smallest sigma
       longName + ",0,0,0,-99999,GHz_detuning,1.01e-6,,1000\r\n" +          // longest name, farthest detuning
       "edge,0.5,54.7,0,100.0001,nm_vac,0.001,,\r\n"                      // shortest wavelength
       "edge,0.5,54.7,0,2999999,GHz,1.01e-6,,\r\n";                          // highest absolute frequency

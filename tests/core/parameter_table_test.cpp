@@ -39,7 +39,9 @@ TEST(ParameterTable, EveryEntryHasUnitRangeScaleStepAndHelp) {
   for (const QuantitySpec& q : quantityTable()) {
     SCOPED_TRACE(q.key);
     EXPECT_TRUE(keys.insert(q.key).second) << "key listed twice";
-    if (!q.fitName.empty()) EXPECT_TRUE(fitNames.insert(q.fitName).second) << "fit name listed twice";
+    if (!q.fitName.empty()) {
+      EXPECT_TRUE(fitNames.insert(q.fitName).second) << "fit name listed twice";
+    }
     EXPECT_FALSE(q.unit.empty());
     EXPECT_TRUE(std::isfinite(q.minimum) && std::isfinite(q.maximum));
     EXPECT_LT(q.minimum, q.maximum);
@@ -82,10 +84,14 @@ TEST(ParameterTable, PresetValuesLieInTheirRanges) {
       const QuantitySpec& q = quantity("centre.parameters." + std::string(info.key));
       const auto i = static_cast<std::size_t>(info.id);
       const double v = preset.values[i].value;
-      if (std::isfinite(v)) EXPECT_NO_THROW(requireInRange(q, v, q.key)) << preset.name << " " << info.key;
-      for (const auto& [isotope, values] : preset.isotopes)
-        if (values[i] && std::isfinite(values[i]->value))
+      if (std::isfinite(v)) {
+        EXPECT_NO_THROW(requireInRange(q, v, q.key)) << preset.name << " " << info.key;
+      }
+      for (const auto& [isotope, values] : preset.isotopes) {
+        if (values[i] && std::isfinite(values[i]->value)) {
           EXPECT_NO_THROW(requireInRange(q, values[i]->value, q.key)) << preset.name << " " << isotope;
+        }
+      }
     }
   }
 }
@@ -114,9 +120,9 @@ TEST(ParameterTable, ReaderMessagesNameTheKeyAndTheRange) {
        "0 \u2026 1"},
       {R"("field": {"magnitude_T": 1, "polar_deg": 181})", "p.json: field.polar_deg", "0 \u2026 180 deg"},
       {R"("magnet": {"tilt_deg": 91})", "p.json: magnet.tilt_deg", "-90 \u2026 90 deg"},
-      {R"("strain": {"crystal": {"xy": 2}})", "p.json: strain.crystal.xy", "-1 \u2026 1"},
+      {R"("strain": {"crystal": {"xy": 2}})", "p.json: strain.crystal.xy", "-0.05 \u2026 0.05"},
       {R"("strain": {"eg_excited": {"magnitude_GHz": -1}})", "p.json: strain.eg_excited.magnitude_GHz",
-       "0 \u2026 10000 GHz"},
+       "0 \u2026 100000 GHz"},
       {R"("fit": {"starts": 0})", "p.json: fit.starts", "1 \u2026 1000"},
   };
   for (const Case& c : cases) {

@@ -31,7 +31,9 @@ PlanRequest demoRequest(ReachKind kind) {
   r.reach.rotationAxisLab = Vec3(0, 0, 1);
   r.constraints = {{FigureId::QubitGHz, 4.0, 14.0},
                    {FigureId::Cyclicity, 20.0},
-                   {FigureId::SeparationLinewidths, 3.0},
+                   // 1.5 linewidths: with thermal C-line widths at the project's 4 K the best plane
+                   // direction here is just under 3, and the check needs feasible directions.
+                   {FigureId::SeparationLinewidths, 1.5},
                    {FigureId::DriveFraction, 0.002}};
   r.objective = {FigureId::QubitGHz, true};
   r.bestCount = 5;
@@ -52,7 +54,7 @@ void checkAgainstBruteForce(ReachKind kind) {
       const Vec3 dir = model.setup().lab.toCrystal(result.directions[k].lab);
       const auto f = referenceFigures(model, request.settings, dir, request.magnitudesT[m], 200);
       const ClassFigures& t = f[static_cast<std::size_t>(request.targetClass)];
-      const bool ok = t.qubitGHz >= 4 && t.qubitGHz <= 14 && t.cyclicity >= 20 && t.separationLinewidths >= 3 &&
+      const bool ok = t.qubitGHz >= 4 && t.qubitGHz <= 14 && t.cyclicity >= 20 && t.separationLinewidths >= 1.5 &&
                       t.driveFraction >= 0.002;
       EXPECT_EQ(ok, region.feasible[k] != 0) << "direction " << k << " magnitude " << request.magnitudesT[m];
       if (ok) bestBrute = std::max(bestBrute, t.qubitGHz), ++feasibleTotal;

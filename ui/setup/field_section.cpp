@@ -7,6 +7,7 @@
 #include <QStackedWidget>
 #include <QVBoxLayout>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/errors.h"
 #include "core/project/field_semantics.h"
 #include "ui/setup/setup_widgets.h"
