@@ -157,7 +157,7 @@ std::string describeTie(const ClassTie& tie) {
   return "classes " + std::to_string(tie.first) + " and " + std::to_string(tie.second) +
          " are mirror images in the " + millerPlane(n) + " plane, which contains the field: same angle to the field (" +
          angle + " deg), same levels, lines and cyclicity" +
-         (tie.driveAlsoEqual ? " and the same drive" : "; the drive differs (microwave direction off the mirror)");
+         (tie.driveAlsoEqual ? " and the same drive" : "; the drive may differ (microwave direction off the mirror)");
 }
 
 std::string describeGroup(const ClassSymmetry& s, const std::vector<int>& group) {
@@ -180,7 +180,7 @@ std::string describeGroup(const ClassSymmetry& s, const std::vector<int>& group)
   return "classes " + names + " have the same angle to the field (" + angle +
          " deg): pairwise mirror images in crystal planes that contain the field (" + mirrors +
          "), so the same levels, lines and cyclicity" +
-         (driveEqual ? " and the same drive" : "; the drive differs for some pairs (microwave direction off their mirror)");
+         (driveEqual ? " and the same drive" : "; the drive may differ for some pairs (microwave direction off their mirror)");
 }
 
 ReachSymmetry targetSymmetryOverReach(const std::vector<Vec3>& directionsCrystal, const std::vector<double>& weights,
@@ -197,13 +197,14 @@ ReachSymmetry targetSymmetryOverReach(const std::vector<Vec3>& directionsCrystal
     const std::vector<int> group = groupOf(s, targetClass);
     if (group.size() == 1) out.targetAloneShare += weights.at(k);
     std::erase_if(always, [&](int c) { return std::find(group.begin(), group.end(), c) == group.end(); });
-    for (const ClassTie& t : s.ties) {
-      if (always.empty() || (t.first != targetClass && t.second != targetClass)) continue;
-      if (t.first != always.front() && t.second != always.front()) continue;
+  }
+  // The mirror behind the first permanent partner, when it is the same at every direction.
+  for (std::size_t k = 0; k < directionsCrystal.size() && !always.empty(); ++k)
+    for (const ClassTie& t : classSymmetryAt(directionsCrystal[k], classes).ties) {
+      if (std::minmax(t.first, t.second) != std::minmax(targetClass, always.front())) continue;
       if (!commonMirror) commonMirror = t.mirrorNormal;
       else if (*commonMirror != t.mirrorNormal) mirrorShared = false;
     }
-  }
   out.alwaysTiedWith = always;
   if (out.targetAloneShare > 0) return out;
   std::string text = "class " + std::to_string(targetClass) + " cannot be singled out anywhere in the reachable set: ";
