@@ -93,10 +93,10 @@ std::optional<Infeasibility> explainInfeasibility(const PlanRequest& request, co
     if (!s.metAnywhere) {
       text = name + " is met nowhere in the reachable set";
     } else {
-      text = name + " is never met together with ";
       if (s.neverTogetherWith.empty()) {
-        text += count > 2 ? "all the other ranges at once" : "the other range";
+        text = name + " holds at some settings, but never where every other range holds";
       } else {
+        text = name + " is never met together with ";
         for (std::size_t k = 0; k < s.neverTogetherWith.size(); ++k)
           text += (k ? " or " : "") + constraintText(request.constraints[s.neverTogetherWith[k]]);
       }
