@@ -10,6 +10,7 @@
 #include "core/io/project_file.h"
 #include "core/project/model_setup.h"
 #include "core/project/field_semantics.h"
+#include "core/planner/plan_advice.h"
 #include "core/planner/plan_report.h"
 
 namespace finestra::cli {
@@ -143,6 +144,8 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
       throw InputError("--step-deg", e.message());  // the user typed the option, not the key
     }
   }();
+  if (common.format == OutputFormat::Table)  // the advice in words above the tables (JSON carries it as keys)
+    for (const std::string& line : planAdvice(*model, request, result).lines) std::cout << line << "\n\n";
   print(planJson(*model, request, result), {planRegionTable(request, result), planBestTable(request, result)},
         common.format);
   return 0;

@@ -3,6 +3,7 @@
 #include <cmath>
 #include <cstdio>
 
+#include "core/planner/plan_advice.h"
 #include "core/thermal/planning_width.h"
 
 namespace finestra {
@@ -139,7 +140,9 @@ json planJson(const CentreModel& model, const PlanRequest& request, const PlanRe
                     {"classes", classes},
                     {"spin_transitions", spinTransitionsJson(s.spinTransitions)}});
   }
-  return {{"target_class", request.targetClass},
+  const PlanAdvice advice = planAdvice(model, request, result);
+  json out = {{"recommendation", advice.recommendation}};
+  out.update(json{{"target_class", request.targetClass},
           {"lines", lineFamilyText(request.settings.family)},
           {"drive_lab", vec(request.settings.driveLab.normalized())},
           {"linewidth_GHz", separationLinewidthGHz(model)},
@@ -148,7 +151,10 @@ json planJson(const CentreModel& model, const PlanRequest& request, const PlanRe
           {"objective", {{"figure", std::string(figureInfo(request.objective.figure).key)},
                          {"goal", request.objective.maximise ? "max" : "min"}}},
           {"regions", regions},
-          {"best", best}};
+          {"best", best}});
+  out["symmetry"] = advice.symmetry;
+  out["infeasible"] = advice.infeasible;
+  return out;
 }
 
 Table planRegionTable(const PlanRequest& request, const PlanResult& result) {

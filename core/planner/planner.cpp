@@ -247,6 +247,8 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
     s.spinTransitions = hyperfineSpinTransitions(model, request.settings, request.targetClass, s.fieldCrystalT);
     result.best.push_back(std::move(s));
   }
+  result.trueDirectionsCrystal = std::move(crystal);
+  result.targetFigures = std::move(target);
   progress.progress(1.0);
   return result;
 }

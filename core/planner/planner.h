@@ -97,6 +97,8 @@ struct PlanResult {
   std::vector<ReachableDirection> directions;
   std::vector<FeasibleRegion> regions;  ///< one per magnitude
   std::vector<RankedSetting> best;      ///< feasible settings, best objective first
+  std::vector<Vec3> trueDirectionsCrystal;  ///< true field direction of each reachable direction (crystal, unit)
+  std::vector<ClassFigures> targetFigures;  ///< target-class figures the constraints were checked on, [m·n + k]
 };
 
 /// Validates the request against the model (classes, constraints, magnitudes).
