@@ -302,3 +302,24 @@ TEST(PlannerPopulation, BadRequestKeysAreNamed) {
   EXPECT_EQ(*ok.alignmentToleranceDeg, 1.5);
   EXPECT_EQ(ok.rankQuantile, 0.9);
 }
+
+// Near the axis of an unstrained class the spin-flip admixture is first order in the transverse
+// field, |B| sin θ, so the flip rate grows as sin²θ and the cyclicity falls as 1/sin²θ (first-order
+// perturbation theory, an exact small-angle limit): doubling the cone's half-angle divides the
+// worst cyclicity by four.
+TEST(PlannerAlignment, CyclicityLimitedByAlignmentFallsAsTheInverseSquareOfTheTilt) {
+  const CentreModel model = modelWithEg(0, 0, 0);
+  PlannerSettings settings;
+  settings.magnitudeT = 0.3;
+  auto worstCyclicity = [&](double toleranceDeg) {
+    const SampledFigures sampled(model, settings, {}, toleranceDeg);
+    std::vector<CentreFigures> centres;
+    sampled.evaluate(Vec3(1, 1, 1).normalized(), 0.3, centres);
+    return centres[0].worst[0].cyclicity;
+  };
+  const double at025 = worstCyclicity(0.25), at05 = worstCyclicity(0.5), at1 = worstCyclicity(1.0);
+  const double s025 = std::sin(0.25 * std::numbers::pi / 180), s05 = std::sin(0.5 * std::numbers::pi / 180),
+               s1 = std::sin(1.0 * std::numbers::pi / 180);
+  EXPECT_NEAR(at025 / at05, (s05 * s05) / (s025 * s025), 0.01 * 4);
+  EXPECT_NEAR(at05 / at1, (s1 * s1) / (s05 * s05), 0.01 * 4);
+}
