@@ -184,7 +184,8 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
       nlohmann::ordered_json rows = nlohmann::ordered_json::array();
       for (const auto& r : table.rows) {
         nlohmann::ordered_json row;
-        for (std::size_t c = 0; c < r.size(); ++c) row[table.headers[c]] = std::stod(r[c]);
+        for (std::size_t c = 0; c < r.size(); ++c)  // an undefined figure ("—") is null, never a crash
+          row[table.headers[c]] = r[c] == "—" ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(std::stod(r[c]));
         rows.push_back(row);
       }
       std::cout << nlohmann::ordered_json{{"magnitude_T", map.magnitudeT}, {"points", rows}}.dump(1) << '\n';

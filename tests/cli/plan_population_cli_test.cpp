@@ -174,3 +174,14 @@ TEST(PlanPopulationCli, BadOptionsNameTheOptionAndTheLimit) {
   EXPECT_NE(r.err.find("strain_population.distribution"), std::string::npos) << r.err;
   EXPECT_NE(r.err.find("bad.json"), std::string::npos) << r.err;
 }
+
+// A map cell with an undefined figure (a field perpendicular to an unstrained class axis: degenerate
+// qubit, no drive) is written as null in the JSON map instead of stopping the command.
+TEST(PlanPopulationCli, MapJsonWritesUndefinedFiguresAsNull) {
+  const CliRun r = runCli("plan " + project("m", "[0,0,0.3]") + " --what map --map-step-deg 45 --format json");
+  ASSERT_EQ(r.exitCode, 0) << r.err;
+  const auto j = nlohmann::json::parse(r.out);
+  bool sawNull = false;
+  for (const auto& p : j["points"]) sawNull = sawNull || p["drive_fraction"].is_null();
+  EXPECT_TRUE(sawNull) << "polar 90, azimuth 135 is perpendicular to the class-0 axis [111]";
+}
