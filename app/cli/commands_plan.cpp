@@ -159,6 +159,16 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
   if (o.what == "point") {
     const Vec3 field = projectFieldCrystal(project, model->setup().lab);
     if (field.norm() == 0) throw InputError(common.project + ": field", "the project's field is zero; no direction to evaluate");
+    if (request.strainPopulation.active() || request.alignmentToleranceDeg) {
+      const SampledFigures sampled(*model, settings, request.strainPopulation, request.alignmentToleranceDeg);
+      std::vector<CentreFigures> centres;
+      sampled.evaluate(field.normalized(), field.norm(), centres);
+      std::array<ClassSpread, kClassCount> spread{};
+      for (int cls : settings.classes) spread[static_cast<std::size_t>(cls)] = SampledFigures::spread(centres, cls);
+      print(pointSpreadJson(*model, request, field, sampled.centres(), spread), {pointSpreadTable(request, spread)},
+            common.format);
+      return 0;
+    }
     std::array<ClassFigures, kClassCount> figures{};
     PlannerKernel(*model, settings).evaluate(field.normalized(), field.norm(), figures);
     std::vector<std::vector<SpinTransition>> transitions;

@@ -146,10 +146,10 @@ json spreadJson(const ClassSpread& spread, bool population, bool cone) {
   return out;
 }
 
-json populationJson(const PlanRequest& request, const PlanResult& result) {
+json populationJson(const PlanRequest& request, const std::vector<CentreStrain>& drawn) {
   const StrainPopulation& p = request.strainPopulation;
   json centres = json::array();
-  for (const CentreStrain& c : result.centres)
+  for (const CentreStrain& c : drawn)
     centres.push_back({{"eg_ground_GHz", c.groundGHz}, {"eg_excited_GHz", c.excitedGHz}, {"angle_deg", c.angleDeg}});
   return {{"eg_ground_GHz", {p.groundGHz[0], p.groundGHz[1]}},
           {"eg_excited_GHz", {p.excitedGHz[0], p.excitedGHz[1]}},
@@ -174,6 +174,16 @@ std::string spreadCell(FigureId id, const Quantiles& q, bool population, int dec
   return id == FigureId::Cyclicity ? cyclicityCell(q.p50) : cell(q.p50, decimals);
 }
 
+std::vector<std::string> robustFigureHeaders(bool population, bool cone) {
+  std::vector<std::string> headers = kFigureHeaders;
+  if (population)
+    for (auto& h : headers) h += " p10/p50/p90";
+  if (cone)
+    for (const char* h : {"drive/free e- worst in cone", "cyclicity worst in cone", "separation worst in cone"})
+      headers.push_back(h + std::string(population ? " p10/p50/p90" : ""));
+  return headers;
+}
+
 // The columns of kFigureHeaders, then the judged figures' worst in the cone when there is one.
 std::vector<std::string> spreadCells(const ClassSpread& spread, bool population, bool cone) {
   const std::vector<std::pair<FigureId, int>> columns{
@@ -186,6 +196,27 @@ std::vector<std::string> spreadCells(const ClassSpread& spread, bool population,
     for (const auto& [id, decimals] : columns)
       if (judgedInCone(id)) out.push_back(spreadCell(id, spread[static_cast<std::size_t>(id)].worst, population, decimals));
   return out;
+}
+
+// The keys that make a robust run reproducible and say how it was judged (top level of the output).
+void addRobustKeys(json& out, const PlanRequest& request, const std::vector<CentreStrain>& drawn) {
+  const bool population = request.strainPopulation.active(), cone = request.alignmentToleranceDeg.has_value();
+  if (population) {
+    out["samples"] = request.strainPopulation.samples;
+    out["seed"] = request.strainPopulation.seed;
+    out["strain_population"] = populationJson(request, drawn);
+  }
+  if (population || cone) out["rank_quantile"] = request.rankQuantile;
+  if (cone) {
+    out["alignment_tolerance_deg"] = *request.alignmentToleranceDeg;
+    const std::vector<double> rings = coneRingsDeg(*request.alignmentToleranceDeg);
+    out["alignment_cone"] = {{"directions", 1 + kConeRingPoints * static_cast<int>(rings.size())},
+                             {"rings_deg", rings},
+                             {"sampled_to_deg", rings.empty() ? 0.0 : rings.back()},
+                             {"sampling", "the set direction and " + std::to_string(kConeRingPoints) +
+                                              " directions on each ring; the tolerance is rounded up to the next ring"},
+                             {"judged", "drive, cyclicity and separation: the smallest value found in the cone"}};
+  }
 }
 
 }  // namespace
@@ -258,22 +289,7 @@ json planJson(const CentreModel& model, const PlanRequest& request, const PlanRe
                          {"goal", request.objective.maximise ? "max" : "min"}}},
           {"regions", regions},
           {"best", best}};
-  if (population) {
-    out["samples"] = request.strainPopulation.samples;
-    out["seed"] = request.strainPopulation.seed;
-    out["strain_population"] = populationJson(request, result);
-  }
-  if (population || cone) out["rank_quantile"] = request.rankQuantile;
-  if (cone) {
-    out["alignment_tolerance_deg"] = *request.alignmentToleranceDeg;
-    const std::vector<double> rings = coneRingsDeg(*request.alignmentToleranceDeg);
-    out["alignment_cone"] = {{"directions", 1 + kConeRingPoints * static_cast<int>(rings.size())},
-                             {"rings_deg", rings},
-                             {"sampled_to_deg", rings.empty() ? 0.0 : rings.back()},
-                             {"sampling", "the set direction and " + std::to_string(kConeRingPoints) +
-                                              " directions on each ring; the tolerance is rounded up to the next ring"},
-                             {"judged", "drive, cyclicity and separation: the smallest value found in the cone"}};
-  }
+  addRobustKeys(out, request, result.centres);
   return out;
 }
 
@@ -300,13 +316,8 @@ Table planRegionTable(const PlanRequest& request, const PlanResult& result) {
 Table planBestTable(const PlanRequest& request, const PlanResult& result) {
   Table t;
   const bool population = request.strainPopulation.active(), cone = request.alignmentToleranceDeg.has_value();
-  std::vector<std::string> figureHeaders = kFigureHeaders;
-  if (population)
-    for (auto& h : figureHeaders) h += " p10/p50/p90";
-  if (cone)
-    for (const char* h : {"drive/free e- worst in cone", "cyclicity worst in cone", "separation worst in cone"})
-      figureHeaders.push_back(h + std::string(population ? " p10/p50/p90" : ""));
-  t.headers = joined({"rank", "|B| T", "polar deg", "azimuth deg", "magnet angle deg", "B crystal T"}, figureHeaders);
+  t.headers = joined({"rank", "|B| T", "polar deg", "azimuth deg", "magnet angle deg", "B crystal T"},
+                     robustOutput(request) ? robustFigureHeaders(population, cone) : kFigureHeaders);
   for (std::size_t k = 0; k < result.best.size(); ++k) {
     const RankedSetting& s = result.best[k];
     const auto target = static_cast<std::size_t>(request.targetClass);
@@ -346,6 +357,36 @@ Table pointTable(const PlannerSettings& settings, const std::array<ClassFigures,
     const ClassFigures& f = figures[static_cast<std::size_t>(cls)];
     t.rows.push_back(joined({std::to_string(cls), cell(f.driveGHzPerT, 4)}, figureCells(f)));
   }
+  return t;
+}
+
+json pointSpreadJson(const CentreModel& model, const PlanRequest& request, const Vec3& fieldCrystal,
+                     const std::vector<CentreStrain>& drawn, const std::array<ClassSpread, kClassCount>& spread) {
+  const PlannerSettings& settings = request.settings;
+  const bool population = request.strainPopulation.active(), cone = request.alignmentToleranceDeg.has_value();
+  json classes = json::array();
+  for (int cls : settings.classes) {
+    const auto axis = classAxisIndices(cls);
+    json c = {{"class", cls}, {"axis_crystal", {axis[0], axis[1], axis[2]}}};
+    c.update(spreadJson(spread[static_cast<std::size_t>(cls)], population, cone));
+    classes.push_back(c);
+  }
+  json out = {{"field_crystal_T", vec(fieldCrystal)},
+              {"field_lab_T", vec(model.setup().lab.toLab(fieldCrystal))},
+              {"lines", lineFamilyText(settings.family)},
+              {"drive_lab", vec(settings.driveLab.normalized())},
+              {"linewidth_GHz", separationLinewidthGHz(model)},
+              {"classes", classes}};
+  addRobustKeys(out, request, drawn);
+  return out;
+}
+
+Table pointSpreadTable(const PlanRequest& request, const std::array<ClassSpread, kClassCount>& spread) {
+  const bool population = request.strainPopulation.active(), cone = request.alignmentToleranceDeg.has_value();
+  Table t;
+  t.headers = joined({"class"}, robustFigureHeaders(population, cone));
+  for (int cls : request.settings.classes)
+    t.rows.push_back(joined({std::to_string(cls)}, spreadCells(spread[static_cast<std::size_t>(cls)], population, cone)));
   return t;
 }
 

@@ -185,3 +185,22 @@ TEST(PlanPopulationCli, MapJsonWritesUndefinedFiguresAsNull) {
   for (const auto& p : j["points"]) sawNull = sawNull || p["drive_fraction"].is_null();
   EXPECT_TRUE(sawNull) << "polar 90, azimuth 135 is perpendicular to the class-0 axis [111]";
 }
+
+// --what point at the project's field: the same quantile objects per class, and along the class-0
+// axis of an unstrained centre the cyclicity is unbounded exactly on axis but finite in the cone.
+TEST(PlanPopulationCli, PointReportsQuantilesAndTheWorstInTheCone) {
+  const auto j = json(runCli("plan " + project("q", "[0.3,0.3,0.3]") +
+                             " --what point --alignment-tolerance-deg 1 --strain-eg-ground-GHz 0,0"
+                             " --strain-eg-excited-GHz 0,0 --strain-samples 4 --strain-seed 2 --format json"));
+  EXPECT_EQ(j["samples"].get<int>(), 4);
+  ASSERT_EQ(j["classes"].size(), 4u);
+  const auto& cyclicity = j["classes"][0]["cyclicity"];
+  EXPECT_TRUE(cyclicity["p50"].is_null());
+  EXPECT_NE(cyclicity["undefined_reason"].get<std::string>().find("alignment"), std::string::npos);
+  EXPECT_GT(cyclicity["worst_in_cone"]["p50"].get<double>(), 1.0);
+  EXPECT_LT(cyclicity["worst_in_cone"]["p50"].get<double>(), 1e12);
+  const CliRun table = runCli("plan " + project("q", "[0.3,0.3,0.3]") + " --what point --alignment-tolerance-deg 1");
+  EXPECT_EQ(table.exitCode, 0) << table.err;
+  EXPECT_NE(table.out.find("limited by alignment"), std::string::npos) << table.out;
+  EXPECT_NE(table.out.find("cyclicity worst in cone"), std::string::npos) << table.out;
+}
