@@ -11,6 +11,7 @@
 #include "core/project/model_setup.h"
 #include "core/project/field_semantics.h"
 #include "core/planner/plan_advice.h"
+#include "core/planner/alignment_cone.h"
 #include "core/planner/plan_report.h"
 
 namespace finestra::cli {
@@ -28,6 +29,47 @@ void print(const nlohmann::ordered_json& json, const std::vector<Table>& tables,
     case OutputFormat::Table:
       for (std::size_t k = 0; k < tables.size(); ++k) std::cout << (k ? "\n" : "") << tables[k].toText();
       break;
+  }
+}
+
+std::array<double, 2> rangeOption(const std::vector<double>& v, const std::string& option) {
+  if (v.size() != 2) throw InputError(option, "expected two comma-separated numbers MIN,MAX (GHz)");
+  return {v[0], v[1]};
+}
+
+// The --strain-* options set or override the request's strain population; a population that starts
+// on the command line needs all four of ranges, samples and seed.
+void applyStrainOptions(const PlanOptions& o, StrainPopulation& p) {
+  const bool any = !o.strainGroundGHz.empty() || !o.strainExcitedGHz.empty() || o.strainSamples || o.strainSeed ||
+                   o.strainAngleDeg;
+  if (!any) return;
+  if (!p.active()) {
+    const std::pair<bool, const char*> needed[] = {{!o.strainGroundGHz.empty(), "--strain-eg-ground-GHz"},
+                                                   {!o.strainExcitedGHz.empty(), "--strain-eg-excited-GHz"},
+                                                   {o.strainSamples.has_value(), "--strain-samples"},
+                                                   {o.strainSeed.has_value(), "--strain-seed"}};
+    for (const auto& [given, option] : needed)
+      if (!given)
+        throw InputError(option, "needed for a strain population (give --strain-eg-ground-GHz, --strain-eg-excited-GHz, "
+                                 "--strain-samples and --strain-seed)");
+  }
+  if (!o.strainGroundGHz.empty()) p.groundGHz = rangeOption(o.strainGroundGHz, "--strain-eg-ground-GHz");
+  if (!o.strainExcitedGHz.empty()) p.excitedGHz = rangeOption(o.strainExcitedGHz, "--strain-eg-excited-GHz");
+  if (o.strainSamples) p.samples = *o.strainSamples;
+  if (o.strainSeed) p.seed = *o.strainSeed;
+  if (o.strainAngleDeg) p.angleDeg = *o.strainAngleDeg;
+  // Name the options, not the request keys, in messages about values typed here.
+  try {
+    validateStrainPopulation(p, "--strain");
+  } catch (const InputError& e) {
+    std::string where = e.where();
+    for (const auto& [key, option] : {std::pair{"--strain.eg_ground_GHz", "--strain-eg-ground-GHz"},
+                                      std::pair{"--strain.eg_excited_GHz", "--strain-eg-excited-GHz"},
+                                      std::pair{"--strain.samples", "--strain-samples"},
+                                      std::pair{"--strain.seed", "--strain-seed"},
+                                      std::pair{"--strain.angle_deg", "--strain-angle-deg"}})
+      if (where.rfind(key, 0) == 0) where = option + where.substr(std::string(key).size());
+    throw InputError(where, e.message());
   }
 }
 
@@ -57,6 +99,15 @@ PlanRequest requestFrom(const Project& project, const CentreModel& model, const 
     request.objective.maximise = o.goal == "max";
   }
   if (o.best) request.bestCount = *o.best;
+  applyStrainOptions(o, request.strainPopulation);
+  if (o.alignmentToleranceDeg) {
+    validateAlignmentTolerance(*o.alignmentToleranceDeg, "--alignment-tolerance-deg");
+    request.alignmentToleranceDeg = *o.alignmentToleranceDeg;
+  }
+  if (o.rankQuantile) {
+    requireInRange(quantity("planner.rank_quantile"), *o.rankQuantile, "--rank-quantile");
+    request.rankQuantile = *o.rankQuantile;
+  }
   request.settings.magnitudeT = request.magnitudesT.empty() ? 0.0 : request.magnitudesT.front();
   validatePlanRequest(request);
   return request;
@@ -82,6 +133,13 @@ void addPlanOptions(CLI::App* cmd, PlanOptions& o) {
   cmd->add_option("--objective", o.objective, "figure to rank by (default cyclicity)");
   cmd->add_option("--goal", o.goal, "max or min");
   cmd->add_option("--best", o.best, "number of ranked settings to report");
+  cmd->add_option("--strain-eg-ground-GHz", o.strainGroundGHz, "strain population: MIN,MAX of the ground E-strain |eps_Eg| (GHz)")->delimiter(',');
+  cmd->add_option("--strain-eg-excited-GHz", o.strainExcitedGHz, "strain population: MIN,MAX of the excited E-strain |eps_Eg| (GHz)")->delimiter(',');
+  cmd->add_option("--strain-samples", o.strainSamples, "strain population: number of centres (1..4096)");
+  cmd->add_option("--strain-seed", o.strainSeed, "strain population: seed of the random draw (0..2^53)");
+  cmd->add_option("--strain-angle-deg", o.strainAngleDeg, "strain population: one fixed E-strain angle instead of a random one per centre");
+  cmd->add_option("--alignment-tolerance-deg", o.alignmentToleranceDeg, "magnet's angular uncertainty (0..10 deg): drive, cyclicity and separation are judged at the worst direction in that cone");
+  cmd->add_option("--rank-quantile", o.rankQuantile, "share of the sampled centres a setting must serve (0.01..1, default 0.5; 0.9 ranks a maximised figure by its p10)");
   cmd->add_option("--direction-lab", o.directionLab, "profile: true field direction in the lab, x,y,z (default: the project's true field)")->delimiter(',');
   cmd->add_option("--max-T", o.maxT, "profile: largest magnitude (default: the first magnitude)");
   cmd->add_option("--points", o.points, "profile: number of magnitudes")->check(CLI::Range(quantity("planner.profile_points").minimum, quantity("planner.profile_points").maximum));
@@ -102,6 +160,16 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
   if (o.what == "point") {
     const Vec3 field = projectFieldCrystal(project, model->setup().lab);
     if (field.norm() == 0) throw InputError(common.project + ": field", "the project's field is zero; no direction to evaluate");
+    if (request.strainPopulation.active() || request.alignmentToleranceDeg) {
+      const SampledFigures sampled(*model, settings, request.strainPopulation, request.alignmentToleranceDeg);
+      std::vector<CentreFigures> centres;
+      sampled.evaluate(field.normalized(), field.norm(), centres);
+      std::array<ClassSpread, kClassCount> spread{};
+      for (int cls : settings.classes) spread[static_cast<std::size_t>(cls)] = SampledFigures::spread(centres, cls);
+      print(pointSpreadJson(*model, request, field, sampled.centres(), spread), {pointSpreadTable(request, spread)},
+            common.format);
+      return 0;
+    }
     std::array<ClassFigures, kClassCount> figures{};
     PlannerKernel(*model, settings).evaluate(field.normalized(), field.norm(), figures);
     std::vector<std::vector<SpinTransition>> transitions;
@@ -127,7 +195,8 @@ int runPlan(const CommonOptions& common, const PlanOptions& o) {
       nlohmann::ordered_json rows = nlohmann::ordered_json::array();
       for (const auto& r : table.rows) {
         nlohmann::ordered_json row;
-        for (std::size_t c = 0; c < r.size(); ++c) row[table.headers[c]] = std::stod(r[c]);
+        for (std::size_t c = 0; c < r.size(); ++c)  // an undefined figure ("—") is null, never a crash
+          row[table.headers[c]] = r[c] == "—" ? nlohmann::ordered_json(nullptr) : nlohmann::ordered_json(std::stod(r[c]));
         rows.push_back(row);
       }
       std::cout << nlohmann::ordered_json{{"magnitude_T", map.magnitudeT}, {"points", rows}}.dump(1) << '\n';

@@ -1,6 +1,7 @@
 #pragma once
 // finestra-cli plan: the magnet planner (issue 5). Settings come from the project (centre, sample,
 // strain, classes, current field), an optional plan request file, and options; later wins.
+#include <cstdint>
 #include <optional>
 #include <string>
 #include <vector>
@@ -26,6 +27,12 @@ struct PlanOptions {
   std::vector<std::string> constraints;
   std::string objective, goal;
   std::optional<int> best;
+  std::vector<double> strainGroundGHz, strainExcitedGHz;  ///< MIN,MAX of a strain population
+  std::optional<int> strainSamples;
+  std::optional<std::uint64_t> strainSeed;
+  std::optional<double> strainAngleDeg;
+  std::optional<double> alignmentToleranceDeg;
+  std::optional<double> rankQuantile;
   std::vector<double> directionLab;  ///< profile direction (default: the project's field)
   std::optional<double> maxT;
   int points = 101;

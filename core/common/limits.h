@@ -50,6 +50,17 @@ inline constexpr int kMaxGapScanSamples = 1000;
 /// under 1 kB), so 10^6 directions stay below ~1 GB; a sphere at a step of 0.25° has 1.04 × 10^6.
 inline constexpr std::size_t kMaxPlannerDirections = 1100000;
 
+/// Centres of a planner strain population. Every reachable direction is evaluated for each centre
+/// (and each direction of an alignment cone, up to 105), so the cost of a plan grows with this
+/// number: 4096 centres take about 10 s per thousand directions on two cores without a cone
+/// (tests/bench/planner_population_bench.cpp: 64 centres × 650 directions in ~0.1 s), ~40 times
+/// that with a 1° cone.
+inline constexpr int kMaxStrainSamples = 4096;
+
+/// Half-angle (deg) of the alignment cone: a magnet's angular uncertainty. Beyond 10° the set
+/// direction no longer describes the field (core/planner/alignment_cone.h samples rings up to 10°).
+inline constexpr double kMaxAlignmentToleranceDeg = 10.0;
+
 /// Cells of the planner's direction map (polar × azimuth). One cell holds a handful of doubles per
 /// class; 2 × 10^6 cells ≈ 0.5 GB. A 0.25° map has 721 × 1441 ≈ 1.04 × 10^6 cells.
 inline constexpr std::size_t kMaxMapCells = 2000000;

@@ -29,6 +29,14 @@ double violation(const Constraint& c, double v) {
   return 0;
 }
 
+// The value that decides the range: the pessimistic quantile when it falls short of the lower end,
+// otherwise the optimistic one (equal for one exact centre).
+double nearestValue(const Constraint& c, const ClassFigures& low, const ClassFigures& high) {
+  const double lowValue = figureValue(low, c.figure);
+  if (std::isnan(lowValue) || lowValue < c.min) return lowValue;
+  return figureValue(high, c.figure);
+}
+
 }  // namespace
 
 std::string constraintText(const Constraint& c) {
@@ -45,7 +53,9 @@ std::optional<Infeasibility> explainInfeasibility(const PlanRequest& request, co
     if (r.feasibleCount > 0) return std::nullopt;
   const std::size_t n = result.directions.size(), magnitudes = request.magnitudesT.size();
   const std::size_t count = request.constraints.size();
-  if (n == 0 || result.targetFigures.size() != n * magnitudes) return std::nullopt;
+  if (n == 0 || result.targetFiguresLow.size() != n * magnitudes ||
+      result.targetFiguresHigh.size() != n * magnitudes)
+    return std::nullopt;
 
   Infeasibility out;
   out.constraints.resize(count);
@@ -55,11 +65,12 @@ std::optional<Infeasibility> explainInfeasibility(const PlanRequest& request, co
   for (std::size_t c = 0; c < count; ++c) out.constraints[c].constraint = request.constraints[c];
   for (std::size_t m = 0; m < magnitudes; ++m)
     for (std::size_t k = 0; k < n; ++k) {
-      const ClassFigures& f = result.targetFigures[m * n + k];
+      const ClassFigures& low = result.targetFiguresLow[m * n + k];
+      const ClassFigures& high = result.targetFiguresHigh[m * n + k];
       const double weight = result.directions[k].solidAngleWeight / static_cast<double>(magnitudes);
       std::size_t failing = 0;
       for (std::size_t c = 0; c < count; ++c) {
-        holds[c] = request.constraints[c].holds(f);
+        holds[c] = request.constraints[c].holds(low, high);
         failing += holds[c] ? 0 : 1;
       }
       for (std::size_t c = 0; c < count; ++c) {
@@ -73,7 +84,7 @@ std::optional<Infeasibility> explainInfeasibility(const PlanRequest& request, co
         if (failing != 1) continue;  // another range fails here too
         s.soleBlockerShare += weight;
         s.othersMetSomewhere = true;
-        const double v = figureValue(f, request.constraints[c].figure);
+        const double v = nearestValue(request.constraints[c], low, high);
         const double miss = violation(request.constraints[c], v);
         if (miss < bestViolation[c]) {
           bestViolation[c] = miss;

@@ -31,7 +31,7 @@ struct Infeasibility {
 /// "cyclicity >= 100", "qubit_GHz in [8, 14]", "drive_fraction <= 0.5".
 std::string constraintText(const Constraint& c);
 
-/// Nothing when some magnitude has a feasible direction. Needs result.targetFigures.
+/// Nothing when some magnitude has a feasible direction. Needs result.targetFiguresLow and targetFiguresHigh.
 std::optional<Infeasibility> explainInfeasibility(const PlanRequest& request, const PlanResult& result);
 
 }  // namespace finestra

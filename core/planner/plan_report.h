@@ -20,6 +20,12 @@ nlohmann::ordered_json pointJson(const CentreModel& model, const PlannerSettings
                                  const std::array<ClassFigures, kClassCount>& figures,
                                  const std::vector<std::vector<SpinTransition>>& transitions);
 Table pointTable(const PlannerSettings& settings, const std::array<ClassFigures, kClassCount>& figures);
+/// The same with a strain population and/or an alignment tolerance: every figure of every class as
+/// quantiles over the centres and worst in the cone, as in planJson's ranked settings.
+nlohmann::ordered_json pointSpreadJson(const CentreModel& model, const PlanRequest& request, const Vec3& fieldCrystal,
+                                       const std::vector<CentreStrain>& drawn,
+                                       const std::array<ClassSpread, kClassCount>& spread);
+Table pointSpreadTable(const PlanRequest& request, const std::array<ClassSpread, kClassCount>& spread);
 
 /// Long form: one row per grid direction and selected class.
 Table mapTable(const PlannerSettings& settings, const FigureMap& map);

@@ -3,11 +3,13 @@
 #include <cmath>
 #include <limits>
 
+#include "core/centre/parameter_table.h"
 #include "core/common/error_location.h"
 #include "core/common/errors.h"
 #include "core/common/limits.h"
 #include "core/io/json_reader.h"
 #include "core/io/text_file.h"
+#include "core/planner/alignment_cone.h"
 
 namespace finestra {
 namespace {
@@ -51,6 +53,38 @@ void readConstraints(const JsonObjectReader& r, const nlohmann::json& object, st
   }
 }
 
+std::array<double, 2> readRange(const JsonObjectReader& r, const char* key) {
+  const nlohmann::json& value = r.raw(key);
+  const std::string path = r.keyPath(key);
+  if (!value.is_array() || value.size() != 2) throw InputError(path, "expected [min, max] in GHz");
+  return {finiteNumber(value[0], path + "[0]"), finiteNumber(value[1], path + "[1]")};
+}
+
+std::uint64_t readSeed(const JsonObjectReader& r) {
+  const nlohmann::json& value = r.raw("seed");
+  if (!value.is_number_unsigned() || value.get<std::uint64_t>() > kMaxStrainSeed)
+    throw InputError(r.keyPath("seed"), "expected an integer from 0 to 2^53 = 9007199254740992");
+  return value.get<std::uint64_t>();
+}
+
+// "strain_population": {"eg_ground_GHz": [min, max], "eg_excited_GHz": [min, max], "samples": N,
+// "seed": S, optional "angle_deg" and "distribution": "uniform"}.
+StrainPopulation readStrainPopulation(const JsonObjectReader& r) {
+  r.allowOnly({"eg_ground_GHz", "eg_excited_GHz", "samples", "seed", "angle_deg", "distribution"});
+  for (const char* key : {"eg_ground_GHz", "eg_excited_GHz", "samples", "seed"})
+    if (!r.has(key)) throw InputError(r.keyPath(key), "missing (a strain population needs eg_ground_GHz, eg_excited_GHz, samples and seed)");
+  if (r.has("distribution") && r.string("distribution") != "uniform")
+    throw InputError(r.keyPath("distribution"), "only \"uniform\" (in magnitude between the bounds) is offered");
+  StrainPopulation p;
+  p.groundGHz = readRange(r, "eg_ground_GHz");
+  p.excitedGHz = readRange(r, "eg_excited_GHz");
+  p.samples = r.integer("samples");
+  p.seed = readSeed(r);
+  if (r.has("angle_deg")) p.angleDeg = r.number("angle_deg");
+  validateStrainPopulation(p, r.keyPath(""));
+  return p;
+}
+
 }  // namespace
 
 ReachKind parseReachKind(const std::string& text, const std::string& where) {
@@ -78,7 +112,8 @@ PlanRequest parsePlanRequest(const std::string& text, const std::string& origin,
   try {
     const JsonObjectReader r(doc, "");
     r.allowOnly({"format", "version", "description", "target_class", "magnitudes_T", "magnitude_T", "drive_lab",
-                 "lines", "reach", "constraints", "objective", "best", "gap_scan_samples"});
+                 "lines", "reach", "constraints", "objective", "best", "gap_scan_samples", "strain_population",
+                 "alignment_tolerance_deg", "rank_quantile"});
     if (r.string("format", "finestra-plan-request") != "finestra-plan-request")
       throw InputError("format", "expected \"finestra-plan-request\"");
     if (r.integer("version", 1) != 1) throw InputError("version", "only version 1 is known");
@@ -110,6 +145,13 @@ PlanRequest parsePlanRequest(const std::string& text, const std::string& origin,
       request.objective.maximise = goal == "max";
     }
     request.bestCount = r.integer("best", request.bestCount);
+    if (r.has("strain_population")) request.strainPopulation = readStrainPopulation(r.object("strain_population"));
+    if (r.has("alignment_tolerance_deg")) {
+      request.alignmentToleranceDeg = r.number("alignment_tolerance_deg");
+      validateAlignmentTolerance(*request.alignmentToleranceDeg);
+    }
+    request.rankQuantile = r.number("rank_quantile", request.rankQuantile);
+    requireInRange(quantity("planner.rank_quantile"), request.rankQuantile, "rank_quantile");
     request.settings.gapScanSamples = r.integer("gap_scan_samples", request.settings.gapScanSamples);
     if (request.settings.gapScanSamples < 2 || request.settings.gapScanSamples > limits::kMaxGapScanSamples)
       throw InputError("gap_scan_samples", "must be between 2 and " + std::to_string(limits::kMaxGapScanSamples));

@@ -6,7 +6,11 @@
 //                "normal_lab": [...], "start_lab": [...],                  (plane)
 //                "magnet_axis_lab": [...], "rotation_axis_lab": [...] },   (sample_rotation)
 //     "constraints": { "qubit_GHz": [8, 14], "cyclicity": [100, null] },   (null = open end)
-//     "objective": { "figure": "cyclicity", "goal": "max" }, "best": 10 }
+//     "objective": { "figure": "cyclicity", "goal": "max" }, "best": 10,
+//     "strain_population": { "eg_ground_GHz": [0, 50], "eg_excited_GHz": [0, 100],
+//                            "samples": 64, "seed": 1, "angle_deg": 30 (optional: fixed angle),
+//                            "distribution": "uniform" (optional, the only one) },
+//     "alignment_tolerance_deg": 1, "rank_quantile": 0.9 }
 // Every key is optional; unknown keys are errors naming the key path.
 #include <string>
 

@@ -9,6 +9,7 @@
 #include "core/common/errors.h"
 #include "core/common/limits.h"
 #include "core/common/parallel.h"
+#include "core/planner/alignment_cone.h"
 #include "core/project/field_semantics.h"
 
 namespace finestra {
@@ -75,6 +76,10 @@ std::string reachKindText(ReachKind k) {
 bool Constraint::holds(const ClassFigures& f) const {
   const double v = figureValue(f, figure);
   return v >= min && v <= max;
+}
+
+bool Constraint::holds(const ClassFigures& low, const ClassFigures& high) const {
+  return figureValue(low, figure) >= min && figureValue(high, figure) <= max;
 }
 
 std::vector<ReachableDirection> reachableDirections(const MagnetReach& reach) {
@@ -149,6 +154,9 @@ void validatePlanRequest(const PlanRequest& request) {
   if (request.bestCount < 0) throw InputError("best", "must not be negative");
   if (!std::isfinite(request.magnet.fieldScale) || request.magnet.fieldScale <= 0)
     throw InputError("magnet.field_scale", "must be finite and > 0");
+  validateStrainPopulation(request.strainPopulation);
+  if (request.alignmentToleranceDeg) validateAlignmentTolerance(*request.alignmentToleranceDeg);
+  requireInRange(quantity("planner.rank_quantile"), request.rankQuantile, "rank_quantile");
 }
 
 PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const ProgressControl& progress) {
@@ -156,7 +164,6 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
   PlanResult result;
   result.directions = reachableDirections(request.reach);
   const auto& dirs = result.directions;
-  const PlannerKernel kernel(model, request.settings);
   const std::size_t n = dirs.size(), magnitudes = request.magnitudesT.size();
   // The true field of direction k at magnet magnitude B is B·gain[k] along crystal[k].
   std::vector<Vec3> trueLab(n), crystal(n);
@@ -168,21 +175,28 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
     gain[k] = t.gain;
   }
 
-  // Target-class figures per (magnitude, direction); all classes are recomputed for the winners.
-  std::vector<ClassFigures> target(n * magnitudes);
+  // Target-class figures per (magnitude, direction), at the two quantiles the ranges and the ranking
+  // use (the same figures for one centre); all classes are recomputed for the winners.
+  const SampledFigures sampled(model, request.settings, request.strainPopulation, request.alignmentToleranceDeg);
+  result.centres = sampled.centres();
+  const double share = request.rankQuantile;
+  std::vector<ClassFigures> targetLow(n * magnitudes), targetHigh(n * magnitudes);
   std::atomic<long> done{0};
   const long total = static_cast<long>(n * magnitudes);
-  const auto cls = static_cast<std::size_t>(request.targetClass);
+  const int cls = request.targetClass;
+  const long progressStride = std::max(1L, 256L / sampled.centreCount());
   parallelChunks(total, [&](long begin, long end) {
-    std::array<ClassFigures, kClassCount> figures{};
+    std::vector<CentreFigures> centres;
+    std::vector<double> scratch;
     for (long item = begin; item < end; ++item) {
-      if ((item - begin) % 256 == 0) {
+      if ((item - begin) % progressStride == 0) {
         progress.throwIfCancelled();
         progress.progress(static_cast<double>(done.load()) / static_cast<double>(total));
       }
       const auto m = static_cast<std::size_t>(item) / n, k = static_cast<std::size_t>(item) % n;
-      kernel.evaluate(crystal[k], request.magnitudesT[m] * gain[k], figures);
-      target[static_cast<std::size_t>(item)] = figures[cls];
+      sampled.evaluate(crystal[k], request.magnitudesT[m] * gain[k], centres);
+      targetLow[static_cast<std::size_t>(item)] = SampledFigures::worstQuantile(centres, cls, 1 - share, scratch);
+      targetHigh[static_cast<std::size_t>(item)] = SampledFigures::worstQuantile(centres, cls, share, scratch);
       done.fetch_add(1, std::memory_order_relaxed);
     }
   });
@@ -199,14 +213,15 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
     region.magnitudeT = request.magnitudesT[m];
     region.feasible.assign(n, 0);
     for (std::size_t k = 0; k < n; ++k) {
-      const ClassFigures& f = target[m * n + k];
+      const ClassFigures& low = targetLow[m * n + k];
+      const ClassFigures& high = targetHigh[m * n + k];
       const bool ok = std::all_of(request.constraints.begin(), request.constraints.end(),
-                                  [&](const Constraint& c) { return c.holds(f); });
+                                  [&](const Constraint& c) { return c.holds(low, high); });
       if (!ok) continue;
       region.feasible[k] = 1;
       ++region.feasibleCount;
       region.fraction += dirs[k].solidAngleWeight;
-      const double v = figureValue(f, request.objective.figure);
+      const double v = figureValue(request.objective.maximise ? low : high, request.objective.figure);
       if (std::isnan(v)) continue;  // feasible, but cannot be ranked by an undefined figure
       feasible.push_back({request.objective.maximise ? v : -v, m, k});
     }
@@ -243,12 +258,22 @@ PlanResult runPlan(const CentreModel& model, const PlanRequest& request, const P
     const double trueMagnitudeT = s.magnitudeT * gain[c.direction];
     s.fieldLabT = trueMagnitudeT * trueLab[c.direction];
     s.fieldCrystalT = trueMagnitudeT * crystal[c.direction];
-    kernel.evaluate(crystal[c.direction], trueMagnitudeT, s.figures);
+    std::vector<CentreFigures> centres;
+    sampled.evaluate(crystal[c.direction], trueMagnitudeT, centres);
+    s.objectiveValue = request.objective.maximise ? c.score : -c.score;
+    for (int k : request.settings.classes) {
+      const auto i = static_cast<std::size_t>(k);
+      s.spread[i] = SampledFigures::spread(centres, k);
+      s.figures[i] = centres.front().exact[i];
+      if (centres.size() > 1)
+        for (const FigureInfo& info : figureTable()) setFigureValue(s.figures[i], info.id, s.spread[i][static_cast<std::size_t>(info.id)].exact.p50);
+    }
     s.spinTransitions = hyperfineSpinTransitions(model, request.settings, request.targetClass, s.fieldCrystalT);
     result.best.push_back(std::move(s));
   }
   result.trueDirectionsCrystal = std::move(crystal);
-  result.targetFigures = std::move(target);
+  result.targetFiguresLow = std::move(targetLow);
+  result.targetFiguresHigh = std::move(targetHigh);
   progress.progress(1.0);
   return result;
 }

@@ -3,12 +3,14 @@
 // where every wanted range holds, and the best settings ranked by one figure (issue 5).
 #include <cstdint>
 #include <limits>
+#include <optional>
 #include <vector>
 
 #include "core/common/progress.h"
 #include "core/crystal/magnet_calibration.h"
 #include "core/planner/fast_kernel.h"
 #include "core/planner/reference.h"
+#include "core/planner/sampled_figures.h"
 
 namespace finestra {
 
@@ -36,6 +38,9 @@ struct Constraint {
   double min = -std::numeric_limits<double>::infinity();
   double max = std::numeric_limits<double>::infinity();
   bool holds(const ClassFigures& f) const;
+  /// With a strain population: the lower bound applies to `low` (the figures a share q of the
+  /// centres reach or exceed), the upper bound to `high` (those a share q stay at or below).
+  bool holds(const ClassFigures& low, const ClassFigures& high) const;
 };
 
 struct Objective {
@@ -54,6 +59,12 @@ struct PlanRequest {
   std::vector<Constraint> constraints;
   Objective objective;
   int bestCount = 10;
+  StrainPopulation strainPopulation;            ///< samples 0: the project's own strain
+  std::optional<double> alignmentToleranceDeg;  ///< magnet's angular uncertainty; none: exact alignment
+  /// Share q of the centres a setting must serve: ranges and ranking use the (1 − q) quantile of a
+  /// figure for a lower bound or a maximised objective, the q quantile for an upper bound or a
+  /// minimised one (q = 0.9: "good for 90 % of the centres" ranks a maximised figure by its p10).
+  double rankQuantile = 0.5;
 };
 
 /// One reachable direction: lab unit vector, its lab angles and the magnet coordinate
@@ -91,6 +102,13 @@ struct RankedSetting {
   Vec3 fieldLabT = Vec3::Zero(), fieldCrystalT = Vec3::Zero();  ///< true field
   std::array<ClassFigures, kClassCount> figures{};
   std::vector<SpinTransition> spinTransitions;  ///< target class, nuclear spin resolved
+  /// The value ranked by: the objective figure of the target class at the rank quantile, worst in
+  /// the alignment cone when judged there (equal to the figure itself for one exact centre).
+  double objectiveValue = 0;
+  /// Quantiles over the centres of every figure of every selected class, on the axis and worst in
+  /// the cone. Without a population `figures` holds the one centre's figures; with one, the medians
+  /// of the on-axis figures.
+  std::array<ClassSpread, kClassCount> spread{};
 };
 
 struct PlanResult {
@@ -98,7 +116,11 @@ struct PlanResult {
   std::vector<FeasibleRegion> regions;  ///< one per magnitude
   std::vector<RankedSetting> best;      ///< feasible settings, best objective first
   std::vector<Vec3> trueDirectionsCrystal;  ///< true field direction of each reachable direction (crystal, unit)
-  std::vector<ClassFigures> targetFigures;  ///< target-class figures the constraints were checked on, [m·n + k]
+  /// Target-class figures the constraints were checked on, [m·n + k]: a range's lower end is checked
+  /// on targetFiguresLow (the pessimistic quantile), its upper end on targetFiguresHigh. Without a
+  /// strain population or cone the two are equal.
+  std::vector<ClassFigures> targetFiguresLow, targetFiguresHigh;
+  std::vector<CentreStrain> centres;    ///< the drawn strain population (empty without one)
 };
 
 /// Validates the request against the model (classes, constraints, magnitudes).

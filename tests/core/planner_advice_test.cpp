@@ -113,7 +113,7 @@ TEST(PlanAdvice, ExclusiveRangesAreExplainedWithTheNearestCompromise) {
   EXPECT_NEAR(low.soleBlockerShare, low.excludedShare, 1e-12);
   EXPECT_EQ(low.neverTogetherWith, std::vector<std::size_t>{1});
   double smallestHigh = std::numeric_limits<double>::infinity();
-  for (const ClassFigures& f : result.targetFigures)
+  for (const ClassFigures& f : result.targetFiguresLow)  // one exact centre: low and high agree
     if (holdsAllBut(request, f, 0)) smallestHigh = std::min(smallestHigh, f.qubitGHz);
   EXPECT_EQ(low.nearestValue, smallestHigh);
   const std::string& sentence = why->sentences[0];
@@ -135,7 +135,7 @@ TEST(PlanAdvice, RangeMetNowhereIsNamedAndItsBestValueFound) {
   EXPECT_FALSE(angle.metAnywhere);
   EXPECT_NEAR(angle.excludedShare, 1.0, 1e-12);
   double largest = -1;
-  for (const ClassFigures& f : result.targetFigures)
+  for (const ClassFigures& f : result.targetFiguresLow)  // one exact centre: low and high agree
     if (holdsAllBut(request, f, 1)) largest = std::max(largest, f.axisAngleDeg);
   EXPECT_EQ(angle.nearestValue, largest);
   EXPECT_NE(why->sentences[1].find("axis_angle_deg >= 200 is met nowhere in the reachable set"), std::string::npos);
