@@ -12,18 +12,20 @@ namespace {
 class ProjectEditCommand : public QUndoCommand {
 public:
   ProjectEditCommand(ProjectDocument& document, const QString& text, Changes what, Project before, Project after,
-                     int mergeId, quint64 dragToken)
+                     int mergeId, quint64 mergeToken)
       : QUndoCommand(text), document_(document), what_(what), before_(std::move(before)),
-        after_(std::move(after)), mergeId_(mergeId), dragToken_(dragToken) {}
+        after_(std::move(after)), mergeId_(mergeId), mergeToken_(mergeToken) {}
 
   void undo() override { document_.applyState(before_, what_); }
   void redo() override { document_.applyState(after_, what_); }
   int id() const override { return mergeId_; }
   bool mergeWith(const QUndoCommand* other) override {
     const auto* next = dynamic_cast<const ProjectEditCommand*>(other);
-    if (!next || next->mergeId_ != mergeId_ || dragToken_ == 0 || next->dragToken_ != dragToken_) return false;
+    if (!next || next->mergeId_ != mergeId_ || mergeToken_ == 0 || next->mergeToken_ != mergeToken_) return false;
     after_ = next->after_;
     what_ |= next->what_;
+    // Up then down in one box: nothing changed, so the stack drops the step.
+    setObsolete(!changesBetween(before_, after_));
     return true;
   }
 
@@ -32,7 +34,7 @@ private:
   Changes what_;
   Project before_, after_;
   int mergeId_;
-  quint64 dragToken_;
+  quint64 mergeToken_;  ///< 0: never merges
 };
 
 }  // namespace
@@ -64,14 +66,25 @@ void ProjectDocument::edit(const QString& text, const std::function<void(Project
   mutate(after);
   const Changes what = changesBetween(project_, after);
   if (!what) return;
+  // A merge token of 0 means "never merge". Drag tokens are odd and input sessions even, so the
+  // two kinds never merge with each other.
+  quint64 token = 0;
+  QString key = mergeKey;
+  if (dragToken_ != 0 && !mergeKey.isEmpty()) {
+    token = dragToken_ * 2 + 1;
+  } else if (inputSession_ != 0) {
+    token = inputSession_ * 2;
+    if (key.isEmpty()) key = text;
+  }
   // QUndoCommand ids must be non-negative to merge; -1 means "never merge".
-  const int mergeId = mergeKey.isEmpty() ? -1 : static_cast<int>(qHash(mergeKey) & 0x7fffffffu);
-  undoStack_.push(new ProjectEditCommand(*this, text, what, project_, std::move(after), mergeId,
-                                         mergeKey.isEmpty() ? 0 : dragToken_));
+  const int mergeId = token == 0 ? -1 : static_cast<int>(qHash(key) & 0x7fffffffu);
+  undoStack_.push(new ProjectEditCommand(*this, text, what, project_, std::move(after), mergeId, token));
 }
 
 void ProjectDocument::beginDrag() { dragToken_ = nextDragToken_++; }
 void ProjectDocument::endDrag() { dragToken_ = 0; }
+void ProjectDocument::beginInputEdit(quint64 session) { inputSession_ = session; }
+void ProjectDocument::endInputEdit() { inputSession_ = 0; }
 
 void ProjectDocument::applyState(const Project& project, Changes what) {
   project_ = project;

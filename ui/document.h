@@ -1,7 +1,8 @@
 #pragma once
 // The document: the one place a project is edited. Every edit is a QUndoCommand holding the
 // project before and after (projects are small plain data), so undo/redo is exact. Edits made
-// during a slider drag share a merge token and collapse into one undo step. Listeners get one
+// during a slider drag, or by wheel and key presses in one focused input box, share a merge token
+// and collapse into one undo step. Listeners get one
 // changed(Changes) signal saying which parts moved; the document finds them itself by comparing the
 // parts of the project before and after the edit (no serialisation, no flags from the caller).
 #include <QObject>
@@ -63,11 +64,18 @@ public:
   /// Applies `mutate` to a copy of the project and pushes it as one undo step named `text`; the
   /// listeners learn which parts changed. An edit that changes no part pushes nothing. With a
   /// non-empty `mergeKey`, consecutive edits of the same key inside one drag (beginDrag/endDrag)
-  /// merge into one step.
+  /// merge into one step. Inside an input session (beginInputEdit/endInputEdit) every edit merges
+  /// with the previous edit of the same session and the same key (mergeKey, or else `text`); a
+  /// merged step that returns the project to where it started is dropped.
   void edit(const QString& text, const std::function<void(Project&)>& mutate, const QString& mergeKey = {});
   void beginDrag();
   void endDrag();
   quint64 dragToken() const { return dragToken_; }
+  /// Marks the edits made while one event is delivered to a focused input box: `session` names
+  /// the box and its current focus (a new number each time the box gains focus), so all edits of
+  /// one box during one focus become one undo step. Nests with nothing: a second begin replaces.
+  void beginInputEdit(quint64 session);
+  void endInputEdit();
 
   /// Replaces the document (new/open/recover): clears undo history. `modified` marks a recovered
   /// project as unsaved.
@@ -102,6 +110,7 @@ private:
   quint64 revision_ = 0;
   quint64 dragToken_ = 0;
   quint64 nextDragToken_ = 1;
+  quint64 inputSession_ = 0;
   QVector<PeakLabel> fitLabels_;
 };
 

@@ -19,18 +19,23 @@
 #include "core/io/project_file.h"
 #include "ui/dialogs.h"
 #include "ui/figure_export.h"
+#include "ui/file_names.h"
+#include "ui/input_intent.h"
 #include "ui/log_panel.h"
+#include "ui/recovery_question.h"
 #include "ui/setup/setup_panel.h"
 
 namespace finestra::ui {
 namespace {
-constexpr int kMaxRecent = 8;
-}
+const QString kFigureFilters = QStringLiteral("PNG (*.png);;SVG (*.svg);;PDF (*.pdf)");
+const QString kDataFilters = QStringLiteral("CSV (*.csv)");
+}  // namespace
 
 MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* parent)
     : QMainWindow(parent), document_(std::make_unique<ProjectDocument>()), jobs_(std::make_unique<JobBoard>()),
       compute_(std::make_unique<ComputeController>(jobs_.get())) {
   setWindowIcon(QIcon(":/finestra/finestra.svg"));
+  intentGuard_ = new InputIntentGuard(*document_, *this);  // before any input box is shown
   QSettings settings;
   display_.unit = static_cast<SpectralUnit>(settings.value("display/unit", static_cast<int>(SpectralUnit::GHzDetuning)).toInt());
   display_.spectrumKind = settings.value("display/kind", 0).toInt() == 0 ? SpectrumKind::Emission : SpectrumKind::Excitation;
@@ -48,6 +53,7 @@ MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* 
     views_.push_back({entry.key, raw, entry.parts, false});
     connect(raw, &ResultView::peakClicked, this, &MainWindow::onPeakClicked);
   }
+  showView(settings.value(kTabKey).toString());  // the last shown tab, before tab changes request results
   connect(tabs_, &QTabWidget::currentChanged, this, &MainWindow::onTabChanged);
   setCentralWidget(tabs_);
 
@@ -86,64 +92,96 @@ MainWindow::MainWindow(QString recoveryFolder, int autosaveIntervalMs, QWidget* 
   autosaver_ = std::make_unique<Autosaver>(*document_, std::move(recoveryFolder), autosaveIntervalMs);
   applyDisplay(display_);
   resize(1500, 940);
-  restoreState(settings.value("window/state").toByteArray());
+  restoreWindowSettings();
   updateTitle();
   requestCompute();
 }
 
-MainWindow::~MainWindow() = default;
+MainWindow::~MainWindow() {
+  // The guard and the setup panel use the document, which members destroy before the widgets go.
+  delete intentGuard_;
+  delete setup_;
+}
+
+void MainWindow::restoreWindowSettings() {
+  const QSettings settings;
+  restoreGeometry(settings.value(kGeometryKey).toByteArray());
+  restoreState(settings.value(kStateKey).toByteArray());
+}
+
+void MainWindow::saveWindowSettings() const {
+  QSettings settings;
+  settings.setValue(kGeometryKey, saveGeometry());
+  settings.setValue(kStateKey, saveState());
+  const int index = tabs_->currentIndex();
+  if (index >= 0) settings.setValue(kTabKey, views_[static_cast<std::size_t>(index)].key);
+}
 
 void MainWindow::buildMenus() {
+  // Every frequent action has a shortcut, shown beside it in the menu.
   QMenu* file = menuBar()->addMenu(tr("&File"));
-  file->addAction(tr("&New project"), QKeySequence::New, this, [this] {
+  file->addAction(tr("&New project"), QKeySequence(Qt::CTRL | Qt::Key_N), this, [this] {
     if (maybeSave()) document_->reset(Project{}, {});
   });
-  file->addAction(tr("&Open\u2026"), QKeySequence::Open, this, [this] {
+  file->addAction(tr("&Open\u2026"), QKeySequence(Qt::CTRL | Qt::Key_O), this, [this] {
     if (!maybeSave()) return;
     const QString path = QFileDialog::getOpenFileName(this, tr("Open project"), {}, tr("Finestra projects (*.json)"));
     if (!path.isEmpty()) openProject(path);
   });
   recentMenu_ = file->addMenu(tr("Open &recent"));
+  recentMenu_->setObjectName("recent-files");
   rebuildRecentMenu();
-  file->addAction(tr("&Save"), QKeySequence::Save, this, &MainWindow::save);
-  file->addAction(tr("Save &as\u2026"), QKeySequence::SaveAs, this, &MainWindow::saveAs);
+  file->addAction(tr("&Save"), QKeySequence(Qt::CTRL | Qt::Key_S), this, &MainWindow::save);
+  file->addAction(tr("Save &as\u2026"), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_S), this, &MainWindow::saveAs);
   file->addSeparator();
-  file->addAction(tr("Import measured &peaks (CSV)\u2026"), this, [this] {
+  file->addAction(tr("Import measured &peaks (CSV)\u2026"), QKeySequence(Qt::CTRL | Qt::Key_I), this, [this] {
     const QString path = QFileDialog::getOpenFileName(this, tr("Import measured peaks"), {}, tr("CSV (*.csv *.txt)"));
     if (!path.isEmpty()) importPeaks(path);
   });
-  file->addAction(tr("Import measured s&pectrum (CSV)\u2026"), this, [this] {
+  file->addAction(tr("Import measured s&pectrum (CSV)\u2026"), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_I), this, [this] {
     const QString path = QFileDialog::getOpenFileName(this, tr("Import measured spectrum"), {}, tr("CSV (*.csv *.txt)"));
     if (!path.isEmpty()) importSpectrum(path);  // reports its own errors
   });
   file->addAction(tr("Remove measured spectrum"), this, [this] { document_->setMeasuredSpectrum(std::nullopt); });
   file->addSeparator();
-  file->addAction(tr("Export &figure (PNG, SVG, PDF)\u2026"), this, &MainWindow::exportFigure);
-  file->addAction(tr("Export &data (CSV)\u2026"), this, &MainWindow::exportData);
+  file->addAction(tr("Export &figure (PNG, SVG, PDF)\u2026"), QKeySequence(Qt::CTRL | Qt::Key_E), this, &MainWindow::exportFigure);
+  file->addAction(tr("Export &data (CSV)\u2026"), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_E), this, &MainWindow::exportData);
   file->addSeparator();
-  file->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
+  file->addAction(tr("&Quit"), QKeySequence(Qt::CTRL | Qt::Key_Q), this, &QWidget::close);
 
   QMenu* edit = menuBar()->addMenu(tr("&Edit"));
+  // The document's undo and redo; the input guard keeps text fields from taking these keys.
   QAction* undo = document_->undoStack().createUndoAction(this, tr("&Undo"));
-  undo->setShortcut(QKeySequence::Undo);
+  undo->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_Z));
   QAction* redo = document_->undoStack().createRedoAction(this, tr("&Redo"));
-  redo->setShortcut(QKeySequence::Redo);
+  redo->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence(Qt::CTRL | Qt::Key_Y)});
   edit->addAction(undo);
   edit->addAction(redo);
   edit->addSeparator();
-  edit->addAction(tr("&Preferences\u2026"), this, [this] {
+  edit->addAction(tr("&Preferences\u2026"), QKeySequence(Qt::CTRL | Qt::Key_Comma), this, [this] {
     PreferencesDialog dialog(display_, this);
     if (dialog.exec() == QDialog::Accepted) applyDisplay(dialog.chosen());
   });
   edit->addAction(tr("&Cancel computation"), QKeySequence(Qt::Key_Escape), this, [this] { jobs_->cancelAll(); });
 
+  buildViewMenu();
+
   QMenu* help = menuBar()->addMenu(tr("&Help"));
-  help->addAction(tr("&About Finestra and safety"), this, [this] { AboutDialog(this).exec(); });
+  help->addAction(tr("&About Finestra and safety"), QKeySequence(Qt::Key_F1), this, [this] { AboutDialog(this).exec(); });
 
   QToolBar* bar = addToolBar(tr("Main"));
   bar->setObjectName("main-toolbar");
   bar->addAction(undo);
   bar->addAction(redo);
+}
+
+void MainWindow::buildViewMenu() {
+  QMenu* viewMenu = menuBar()->addMenu(tr("&View"));
+  for (std::size_t i = 0; i < views_.size(); ++i) {
+    const QString key = views_[i].key;
+    QAction* action = viewMenu->addAction(tabs_->tabText(static_cast<int>(i)), this, [this, key] { showView(key); });
+    if (i < 9) action->setShortcut(QKeySequence(Qt::CTRL | static_cast<Qt::Key>(Qt::Key_1 + static_cast<int>(i))));
+  }
 }
 
 void MainWindow::applyDisplay(const DisplaySettings& display) {
@@ -202,7 +240,8 @@ void MainWindow::onTabChanged() {
 
 void MainWindow::updateTitle() {
   const QString name = document_->filePath().isEmpty() ? tr("untitled") : QFileInfo(document_->filePath()).fileName();
-  setWindowTitle(QStringLiteral("%1%2 \u2014 Finestra").arg(name, document_->isModified() ? "*" : ""));
+  // Qt shows "[*]" as "*" while the window is modified, and warns when the placeholder is missing.
+  setWindowTitle(QStringLiteral("%1[*] \u2014 Finestra").arg(name));
   setWindowModified(document_->isModified());
 }
 
@@ -298,9 +337,10 @@ bool MainWindow::save() {
 }
 
 bool MainWindow::saveAs() {
-  QString path = QFileDialog::getSaveFileName(this, tr("Save project"), document_->filePath(), tr("Finestra projects (*.json)"));
+  const QString filters = tr("Finestra projects (*.json)");
+  const QString path = withOfferedExtension(QFileDialog::getSaveFileName(this, tr("Save project"), document_->filePath(), filters),
+                                            filters, filters);
   if (path.isEmpty()) return false;
-  if (QFileInfo(path).suffix().isEmpty()) path += ".json";
   try {
     document_->saveAs(path);
   } catch (const InputError& e) {
@@ -314,18 +354,18 @@ bool MainWindow::saveAs() {
 
 void MainWindow::addRecent(const QString& path) {
   QSettings settings;
-  QStringList recent = settings.value("files/recent").toStringList();
+  QStringList recent = settings.value(kRecentKey).toStringList();
   const QString absolute = QFileInfo(path).absoluteFilePath();
   recent.removeAll(absolute);
   recent.prepend(absolute);
   while (recent.size() > kMaxRecent) recent.removeLast();
-  settings.setValue("files/recent", recent);
+  settings.setValue(kRecentKey, recent);
   rebuildRecentMenu();
 }
 
 void MainWindow::rebuildRecentMenu() {
   recentMenu_->clear();
-  const QStringList recent = QSettings().value("files/recent").toStringList();
+  const QStringList recent = QSettings().value(kRecentKey).toStringList();
   for (const QString& path : recent)
     recentMenu_->addAction(path, this, [this, path] {
       if (maybeSave()) openProject(path);
@@ -339,7 +379,9 @@ void MainWindow::exportFigure() {
     QMessageBox::information(this, tr("Export figure"), tr("This view has no figure; use Export data (CSV)."));
     return;
   }
-  const QString path = QFileDialog::getSaveFileName(this, tr("Export figure"), {}, tr("PNG (*.png);;SVG (*.svg);;PDF (*.pdf)"));
+  QString chosen;
+  const QString path =
+      withOfferedExtension(QFileDialog::getSaveFileName(this, tr("Export figure"), {}, kFigureFilters, &chosen), chosen, kFigureFilters);
   if (path.isEmpty()) return;
   try {
     ui::exportFigure(*v->figure(), path, 1400, 900);
@@ -352,7 +394,9 @@ void MainWindow::exportFigure() {
 void MainWindow::exportData() {
   auto* v = qobject_cast<ResultView*>(tabs_->currentWidget());
   if (!v) return;
-  const QString path = QFileDialog::getSaveFileName(this, tr("Export data"), {}, tr("CSV (*.csv)"));
+  QString chosen;
+  const QString path =
+      withOfferedExtension(QFileDialog::getSaveFileName(this, tr("Export data"), {}, kDataFilters, &chosen), chosen, kDataFilters);
   if (path.isEmpty()) return;
   try {
     exportTableCsv(v->dataTable(), path);
@@ -383,23 +427,23 @@ void MainWindow::onPeakClicked(int measurement, int peak) {
 
 void MainWindow::offerRecovery() {
   for (const RecoveryEntry& entry : Autosaver::orphanedCopies(autosaver_->folder())) {
-    const auto answer = QMessageBox::question(
-        this, tr("Recover unsaved work"),
-        tr("Finestra found unsaved work from a session that ended unexpectedly (%1). Recover it?")
-            .arg(entry.originalPath.isEmpty() ? tr("untitled project") : entry.originalPath),
-        QMessageBox::Yes | QMessageBox::No | QMessageBox::Discard, QMessageBox::Yes);
-    if (answer == QMessageBox::Yes) {
-      try {
-        document_->reset(readProjectFile(entry.projectPath.toStdString()), entry.originalPath, true);
-        spdlog::info("recovered unsaved work of {}", entry.originalPath.toStdString());
-        Autosaver::discard(entry);
-        autosaver_->saveNow();
-        return;
-      } catch (const InputError& e) {
-        QMessageBox::warning(this, tr("Recovery failed"), QString::fromStdString(e.what()));
-      }
-    } else if (answer == QMessageBox::Discard) {
-      Autosaver::discard(entry);
+    switch (askAboutRecovery(entry, this)) {
+      case RecoveryChoice::Recover:
+        try {
+          document_->reset(readProjectFile(entry.projectPath.toStdString()), entry.originalPath, true);
+          spdlog::info("recovered unsaved work of {}", entry.originalPath.toStdString());
+          Autosaver::discard(entry);
+          autosaver_->saveNow();
+          return;
+        } catch (const InputError& e) {
+          QMessageBox::warning(this, tr("Recovery failed"), QString::fromStdString(e.what()));
+        }
+        break;
+      case RecoveryChoice::DiscardCopy: Autosaver::discard(entry); break;
+      case RecoveryChoice::OpenOriginal:
+        if (openProject(entry.originalPath)) return;
+        break;
+      case RecoveryChoice::Later: break;
     }
   }
 }
@@ -409,7 +453,7 @@ void MainWindow::closeEvent(QCloseEvent* event) {
     event->ignore();
     return;
   }
-  QSettings().setValue("window/state", saveState());
+  saveWindowSettings();
   jobs_->cancelAll();
   autosaver_->finishCleanly();
   event->accept();

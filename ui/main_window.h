@@ -22,6 +22,7 @@ namespace finestra::ui {
 
 class SetupPanel;
 class LogPanel;
+class InputIntentGuard;
 
 class MainWindow : public QMainWindow {
   Q_OBJECT
@@ -42,6 +43,15 @@ public:
   ResultView* view(const QString& key) const;
   /// Offers orphaned autosaved copies for recovery (called once after start-up).
   void offerRecovery();
+  /// Settings keys of the window layout: restored by the constructor, written on close.
+  static constexpr const char* kGeometryKey = "window/geometry";
+  static constexpr const char* kStateKey = "window/state";
+  static constexpr const char* kTabKey = "window/tab";
+  static constexpr const char* kRecentKey = "files/recent";
+  /// Recent files listed in File > Open recent, newest first.
+  static constexpr int kMaxRecent = 8;
+  /// Writes geometry, dock layout and shown tab to the settings (also done on close).
+  void saveWindowSettings() const;
 
 Q_SIGNALS:
   /// A result was accepted and shown in every view.
@@ -52,6 +62,8 @@ protected:
 
 private:
   void buildMenus();
+  void buildViewMenu();
+  void restoreWindowSettings();
   void requestCompute();
   void onResult(const ResultPtr& result);
   void onTabChanged();
@@ -72,6 +84,7 @@ private:
   std::unique_ptr<JobBoard> jobs_;
   std::unique_ptr<ComputeController> compute_;
   std::unique_ptr<Autosaver> autosaver_;
+  InputIntentGuard* intentGuard_ = nullptr;
   SetupPanel* setup_ = nullptr;
   LogPanel* log_ = nullptr;
   QTabWidget* tabs_ = nullptr;

@@ -51,10 +51,12 @@ int runLevels(const CommonOptions& o) {
   return 0;
 }
 
-int runLines(const CommonOptions& o) {
+int runLines(const CommonOptions& o, const LinesOptions& options) {
+  std::optional<SpectralUnit> unit;
+  if (!options.unit.empty()) unit = parseSpectralUnit(options.unit, "--unit");  // before the work: fail fast
   const Loaded l = load(o.project);
   const auto classes = solveProjectClasses(l.model, l.project);
-  print(o.format, [&] { return linesJson(l.model, classes); }, [&] { return linesTable(l.model, classes); });
+  print(o.format, [&] { return linesJson(l.model, classes, unit); }, [&] { return linesTable(l.model, classes, unit); });
   return 0;
 }
 

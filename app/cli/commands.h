@@ -19,13 +19,17 @@ struct SpectrumOptions {
   int points = 2001;
 };
 
+struct LinesOptions {
+  std::string unit;  ///< empty: no position column; otherwise a spectral unit key as for spectrum --unit
+};
+
 struct SweepOptions {
   std::string name;  ///< empty: the first sweep of the project
 };
 
 int runPresets(OutputFormat format);
 int runLevels(const CommonOptions& options);
-int runLines(const CommonOptions& options);
+int runLines(const CommonOptions& options, const LinesOptions& lines = {});
 int runSpectrum(const CommonOptions& options, const SpectrumOptions& spectrum);
 int runSweep(const CommonOptions& options, const SweepOptions& sweep);
 

@@ -47,6 +47,8 @@ int main(int argc, char** argv) {
   addProjectOptions(levels, common);
   auto* lines = app.add_subcommand("lines", "optical lines with labels, frequencies and intensities");
   addProjectOptions(lines, common);
+  LinesOptions linesOptions;
+  lines->add_option("--unit", linesOptions.unit, "also give each line's position in GHz_detuning, GHz, THz, nm_vac, nm_air, meV or cm-1");
   auto* spec = app.add_subcommand("spectrum", "simulated PL or PLE spectrum (CSV unless --format json)");
   addProjectOptions(spec, common);
   spec->add_option("--unit", spectrum.unit, "GHz_detuning, GHz, THz, nm_vac, nm_air, meV or cm-1");
@@ -100,7 +102,7 @@ int main(int argc, char** argv) {
   try {
     if (*presets) return runPresets(presetFormat);
     if (*levels) return runLevels(common);
-    if (*lines) return runLines(common);
+    if (*lines) return runLines(common, linesOptions);
     if (*spec) return runSpectrum(common, spectrum);
     if (*sw) return runSweep(common, sweep);
     if (*planCmd) return runPlan(common, plan);

@@ -13,20 +13,35 @@ ordered toArray(const VectorXr& v) {
 }
 
 std::string branchName(int b) { return b == 0 ? "lower" : "upper"; }
+
+/// Decimals that resolve about 1 MHz of optical frequency near 400-900 nm on `unit`.
+int positionDecimals(SpectralUnit unit) {
+  switch (unit) {
+    case SpectralUnit::GHzAbsolute:
+    case SpectralUnit::GHzDetuning: return 3;
+    case SpectralUnit::THz: return 6;
+    case SpectralUnit::NmVacuum:
+    case SpectralUnit::NmAir: return 6;
+    case SpectralUnit::MeV: return 6;
+    case SpectralUnit::InvCm: return 5;
+  }
+  return 6;
+}
 }  // namespace
 
-ordered linesJson(const CentreModel& model, const std::vector<ClassSolution>& classes) {
-  (void)model;
-  ordered out{{"classes", ordered::array()}};
+ordered linesJson(const CentreModel& model, const std::vector<ClassSolution>& classes, std::optional<SpectralUnit> unit) {
+  ordered out;
+  if (unit) out["unit"] = std::string(spectralUnitKey(*unit));
+  out["classes"] = ordered::array();
   for (const ClassSolution& s : classes) {
     ordered lines = ordered::array();
-    for (const OpticalLine& l : s.lines)
-      lines.push_back(ordered{{"upper", l.upper},
-                              {"lower", l.lower},
-                              {"label", l.label()},
-                              {"frequency_GHz", l.frequencyGHz},
-                              {"intensity", l.intensity},
-                              {"intensity_crystal_xyz", l.intensityCrystal}});
+    for (const OpticalLine& l : s.lines) {
+      ordered line{{"upper", l.upper}, {"lower", l.lower}, {"label", l.label()}, {"frequency_GHz", l.frequencyGHz}};
+      if (unit) line["position"] = fromAbsoluteGHz(l.frequencyGHz, *unit, model.zplGHz());
+      line["intensity"] = l.intensity;
+      line["intensity_crystal_xyz"] = l.intensityCrystal;
+      lines.push_back(std::move(line));
+    }
     out["classes"].push_back(ordered{{"class", s.cls},
                                      {"axis_crystal", classAxisIndices(s.cls)},
                                      {"ground_GHz", toArray(s.ground.energies)},
@@ -36,17 +51,24 @@ ordered linesJson(const CentreModel& model, const std::vector<ClassSolution>& cl
   return out;
 }
 
-Table linesTable(const CentreModel& model, const std::vector<ClassSolution>& classes) {
+Table linesTable(const CentreModel& model, const std::vector<ClassSolution>& classes, std::optional<SpectralUnit> unit) {
   Table t{{"class", "line", "upper", "lower", "frequency (THz)", "detuning (GHz)", "vac. wavelength (nm)",
            "intensity", "I[100]", "I[010]", "I[001]"},
           {}};
+  constexpr std::ptrdiff_t kPositionColumn = 4;  // after "lower"
+  if (unit) t.headers.insert(t.headers.begin() + kPositionColumn, spectralUnitLabel(*unit));
   for (const ClassSolution& s : classes)
-    for (const OpticalLine& l : s.lines)
-      t.rows.push_back({std::to_string(s.cls), l.label(), std::to_string(l.upper), std::to_string(l.lower),
-                        fixed(l.frequencyGHz * 1e-3, 6), fixed(l.frequencyGHz - model.zplGHz(), 3),
-                        fixed(fromAbsoluteGHz(l.frequencyGHz, SpectralUnit::NmVacuum, 0), 5), fixed(l.intensity, 4),
-                        fixed(l.intensityCrystal[0], 4), fixed(l.intensityCrystal[1], 4),
-                        fixed(l.intensityCrystal[2], 4)});
+    for (const OpticalLine& l : s.lines) {
+      std::vector<std::string> row{std::to_string(s.cls), l.label(), std::to_string(l.upper), std::to_string(l.lower),
+                                   fixed(l.frequencyGHz * 1e-3, 6), fixed(l.frequencyGHz - model.zplGHz(), 3),
+                                   fixed(fromAbsoluteGHz(l.frequencyGHz, SpectralUnit::NmVacuum, 0), 5), fixed(l.intensity, 4),
+                                   fixed(l.intensityCrystal[0], 4), fixed(l.intensityCrystal[1], 4),
+                                   fixed(l.intensityCrystal[2], 4)};
+      if (unit)
+        row.insert(row.begin() + kPositionColumn,
+                   fixed(fromAbsoluteGHz(l.frequencyGHz, *unit, model.zplGHz()), positionDecimals(*unit)));
+      t.rows.push_back(std::move(row));
+    }
   return t;
 }
 

@@ -2,6 +2,7 @@
 // Machine (JSON) and human (table/CSV) forms of the engine's results. The JSON of lines has the
 // exact layout of docs/architecture.md, Machine-readable output: outside tooling reads it.
 #include <nlohmann/json.hpp>
+#include <optional>
 #include <vector>
 
 #include "core/centre/presets.h"
@@ -11,8 +12,12 @@
 
 namespace finestra {
 
-nlohmann::ordered_json linesJson(const CentreModel& model, const std::vector<ClassSolution>& classes);
-Table linesTable(const CentreModel& model, const std::vector<ClassSolution>& classes);
+/// With `unit`, the JSON also names the unit ("unit") and gives each line its "position" on it,
+/// and the table gains a position column after "lower"; detuning is from the model's ZPL.
+nlohmann::ordered_json linesJson(const CentreModel& model, const std::vector<ClassSolution>& classes,
+                                 std::optional<SpectralUnit> unit = std::nullopt);
+Table linesTable(const CentreModel& model, const std::vector<ClassSolution>& classes,
+                 std::optional<SpectralUnit> unit = std::nullopt);
 
 nlohmann::ordered_json levelsJson(const std::vector<ClassSolution>& classes);
 Table levelsTable(const std::vector<ClassSolution>& classes);

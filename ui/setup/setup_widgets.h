@@ -9,6 +9,7 @@
 #include <array>
 #include <string_view>
 
+#include "core/centre/parameter_table.h"  // quantity(): the sections size their boxes from the table
 #include "core/common/types.h"
 
 namespace finestra::ui {
